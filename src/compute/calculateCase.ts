@@ -1,0 +1,125 @@
+// One calculation of a case: geometry, radiological depths and every requested method, in a
+// plain serialisable report. Runs unchanged in a worker, on the main thread and in Node.
+import { ssdCmOf, fieldAtDepthCm, equivalentSquareCm } from '../engine/beam/geometry';
+import { getMaterial } from '../engine/materials/materialLibrary';
+import {
+  layerIndexAtDepth,
+  makeSlabPhantom,
+  radiologicalDepthCm,
+  type SlabPhantom,
+} from '../engine/phantom/slabPhantom';
+import type { MethodResult } from '../engine/methodResult';
+import type { LaminaCase } from '../io/caseSchema';
+
+export const CALC_FORMAT = 'lamina.calc';
+export const CALC_VERSION = 1;
+
+export interface CalcOptions {
+  /** Method ids to compute; all available when absent. */
+  methods?: readonly string[];
+  /** Depth step of the curves (cm). */
+  depthStepCm?: number;
+}
+
+export interface CalcReport {
+  format: typeof CALC_FORMAT;
+  version: typeof CALC_VERSION;
+  caseName: string;
+  beam: {
+    energy: string;
+    setup: string;
+    ssdCm: number;
+    fieldXCm: number;
+    fieldYCm: number;
+    equivalentSquareAtSurfaceCm: number;
+  };
+  layers: {
+    index: number;
+    materialId: string;
+    material: string;
+    thicknessCm: number;
+    topCm: number;
+    bottomCm: number;
+    densityGPerCm3: number;
+    relativeElectronDensity: number;
+  }[];
+  points: { id: string; depthCm: number; radiologicalDepthCm: number; layerIndex: number }[];
+  /** Depth grid shared by all curves (cm). */
+  depthCm: number[];
+  /** Radiological depth on that grid (cm). */
+  radiologicalDepthCm: number[];
+  methods: MethodResult[];
+  /** Method ids that were asked for but are not available, with the reason. */
+  unavailable: { id: string; reason: string }[];
+  warnings: unknown[];
+  cautions: string[];
+}
+
+export const CAUTIONS: readonly string[] = [
+  'Lamina is a teaching and independent-check aid, not a treatment-planning or MU-verification system.',
+  'A modelled beam is not a commissioned beam: results depend on the beam data entered or modelled.',
+  'Clinical decisions follow the local protocol and a licensed medical physicist’s judgement.',
+  'Slab phantoms are idealised: laterally infinite flat layers, central axis only, no patient contour or motion.',
+];
+
+export function phantomOfCase(c: LaminaCase): SlabPhantom {
+  return makeSlabPhantom(c.layers);
+}
+
+/** Depth grid from 0 to the phantom's bottom with the given step, always including the bottom. */
+export function depthGridCm(totalCm: number, stepCm: number): number[] {
+  const n = Math.max(1, Math.round(totalCm / stepCm));
+  const out: number[] = [];
+  for (let i = 0; i <= n; i++) out.push((totalCm * i) / n);
+  return out;
+}
+
+export function calculateCase(c: LaminaCase, options: CalcOptions = {}): CalcReport {
+  const phantom = phantomOfCase(c);
+  const ssdCm = ssdCmOf(c.beam.setup);
+  const step = options.depthStepCm ?? 0.05;
+  const grid = depthGridCm(phantom.totalThicknessCm, step);
+  const requested = options.methods ?? [];
+  const unavailable = requested.map((id) => ({ id, reason: 'method not implemented yet' }));
+  return {
+    format: CALC_FORMAT,
+    version: CALC_VERSION,
+    caseName: c.name,
+    beam: {
+      energy: c.beam.energy,
+      setup:
+        c.beam.setup.kind === 'SSD'
+          ? `SSD ${c.beam.setup.ssdCm} cm`
+          : `SAD ${c.beam.setup.sadCm} cm, isocentre at ${c.beam.setup.isocentreDepthCm} cm`,
+      ssdCm,
+      fieldXCm: c.beam.fieldXCm,
+      fieldYCm: c.beam.fieldYCm,
+      equivalentSquareAtSurfaceCm: equivalentSquareCm(
+        fieldAtDepthCm(c.beam.fieldXCm, ssdCm, 0),
+        fieldAtDepthCm(c.beam.fieldYCm, ssdCm, 0),
+      ),
+    },
+    layers: phantom.layers.map((l, index) => ({
+      index,
+      materialId: l.materialId,
+      material: getMaterial(l.materialId).label,
+      thicknessCm: l.thicknessCm,
+      topCm: l.topCm,
+      bottomCm: l.bottomCm,
+      densityGPerCm3: l.densityGPerCm3,
+      relativeElectronDensity: l.relativeElectronDensity,
+    })),
+    points: c.points.map((p) => ({
+      id: p.id,
+      depthCm: p.depthCm,
+      radiologicalDepthCm: radiologicalDepthCm(phantom, p.depthCm),
+      layerIndex: layerIndexAtDepth(phantom, p.depthCm),
+    })),
+    depthCm: grid,
+    radiologicalDepthCm: grid.map((d) => radiologicalDepthCm(phantom, d)),
+    methods: [],
+    unavailable,
+    warnings: [],
+    cautions: [...CAUTIONS],
+  };
+}

@@ -1,0 +1,3 @@
+export * from './materialLibrary';
+export * from './photonCoefficients';
+export * from './electronStopping';

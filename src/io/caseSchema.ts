@@ -1,0 +1,143 @@
+// The Lamina case file: a versioned JSON document describing one beam's path through a slab
+// phantom and the points of interest on its central axis. Every rule here names its field.
+import { z } from 'zod';
+import { BEAM_ENERGIES } from '../engine/beam/energies';
+import { MATERIAL_IDS } from '../engine/materials/materialLibrary';
+
+export const CASE_FORMAT = 'lamina.case';
+export const CASE_VERSION = 1;
+
+/** Limits that keep inputs physical and inside what the engine is built for. */
+export const LIMITS = {
+  maxDensityGPerCm3: 3,
+  maxLayerThicknessCm: 100,
+  maxPhantomThicknessCm: 100,
+  minDistanceCm: 50,
+  maxDistanceCm: 150,
+  minFieldCm: 1,
+  maxFieldCm: 40,
+  maxLayers: 50,
+  maxPoints: 50,
+} as const;
+
+const finite = (what: string) =>
+  z.number({ error: `${what} must be a number` }).refine(Number.isFinite, `${what} must be finite`);
+
+export const layerSchema = z.strictObject({
+  materialId: z.enum(MATERIAL_IDS, {
+    error: `unknown material (expected one of ${MATERIAL_IDS.join(', ')})`,
+  }),
+  thicknessCm: finite('thickness')
+    .refine((v) => v > 0, 'thickness must be > 0 cm')
+    .refine((v) => v <= LIMITS.maxLayerThicknessCm, `thickness must be ≤ ${LIMITS.maxLayerThicknessCm} cm`),
+  densityGPerCm3: finite('density')
+    .refine((v) => v > 0, 'density must be > 0 g/cm³')
+    .refine((v) => v <= LIMITS.maxDensityGPerCm3, `density must be ≤ ${LIMITS.maxDensityGPerCm3} g/cm³`)
+    .optional(),
+  label: z.string().max(80, 'label must be at most 80 characters').optional(),
+});
+
+const distance = (what: string) =>
+  finite(what)
+    .refine((v) => v >= LIMITS.minDistanceCm, `${what} must be ≥ ${LIMITS.minDistanceCm} cm`)
+    .refine((v) => v <= LIMITS.maxDistanceCm, `${what} must be ≤ ${LIMITS.maxDistanceCm} cm`);
+
+const field = (what: string) =>
+  finite(what)
+    .refine((v) => v >= LIMITS.minFieldCm, `${what} must be ≥ ${LIMITS.minFieldCm} cm`)
+    .refine((v) => v <= LIMITS.maxFieldCm, `${what} must be ≤ ${LIMITS.maxFieldCm} cm`);
+
+export const setupSchema = z.discriminatedUnion(
+  'kind',
+  [
+    z.strictObject({ kind: z.literal('SSD'), ssdCm: distance('SSD') }),
+    z.strictObject({
+      kind: z.literal('SAD'),
+      sadCm: distance('SAD'),
+      isocentreDepthCm: finite('isocentre depth').refine((v) => v >= 0, 'isocentre depth must be ≥ 0 cm'),
+    }),
+  ],
+  { error: 'set-up kind must be "SSD" or "SAD"' },
+);
+
+export const beamSchema = z.strictObject({
+  energy: z.enum(BEAM_ENERGIES, {
+    error: `unknown energy (expected one of ${BEAM_ENERGIES.join(', ')})`,
+  }),
+  setup: setupSchema,
+  /** Field width (X) at 100 cm from the source (cm). */
+  fieldXCm: field('field X'),
+  /** Field length (Y) at 100 cm from the source (cm). */
+  fieldYCm: field('field Y'),
+});
+
+export const pointSchema = z.strictObject({
+  id: z
+    .string({ error: 'point id must be text' })
+    .min(1, 'point id must not be empty')
+    .max(40, 'point id must be at most 40 characters'),
+  depthCm: finite('depth').refine((v) => v >= 0, 'depth must be ≥ 0 cm'),
+  /** Dose per fraction from the planning system at this point (cGy), for comparison. */
+  planningDoseCGy: finite('planning dose').refine((v) => v >= 0, 'planning dose must be ≥ 0 cGy').optional(),
+  /** Monitor units from the planning system for this beam, for comparison. */
+  planningMu: finite('planning MU').refine((v) => v > 0, 'planning MU must be > 0').optional(),
+});
+
+export const caseSchema = z
+  .strictObject({
+    format: z.literal(CASE_FORMAT, { error: `format must be "${CASE_FORMAT}"` }),
+    version: z.literal(CASE_VERSION, { error: `version must be ${CASE_VERSION}` }),
+    name: z.string({ error: 'name must be text' }).max(200, 'name must be at most 200 characters'),
+    notes: z.string().max(5000, 'notes must be at most 5000 characters').optional(),
+    beam: beamSchema,
+    layers: z
+      .array(layerSchema, { error: 'layers must be a list' })
+      .min(1, 'layers: at least one layer is needed')
+      .max(LIMITS.maxLayers, `layers: at most ${LIMITS.maxLayers} layers`),
+    points: z
+      .array(pointSchema, { error: 'points must be a list' })
+      .max(LIMITS.maxPoints, `points: at most ${LIMITS.maxPoints} points`),
+  })
+  .superRefine((c, ctx) => {
+    const total = c.layers.reduce((s, l) => s + l.thicknessCm, 0);
+    if (total > LIMITS.maxPhantomThicknessCm + 1e-9)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['layers'],
+        message: `total thickness ${total.toFixed(2)} cm exceeds ${LIMITS.maxPhantomThicknessCm} cm`,
+      });
+    c.points.forEach((p, i) => {
+      if (p.depthCm > total + 1e-9)
+        ctx.addIssue({
+          code: 'custom',
+          path: ['points', i, 'depthCm'],
+          message: `depth ${p.depthCm} cm is outside the phantom (0–${total.toFixed(2)} cm)`,
+        });
+    });
+    const seen = new Set<string>();
+    c.points.forEach((p, i) => {
+      if (seen.has(p.id))
+        ctx.addIssue({ code: 'custom', path: ['points', i, 'id'], message: `duplicate point id "${p.id}"` });
+      seen.add(p.id);
+    });
+    if (c.beam.setup.kind === 'SAD') {
+      const { sadCm, isocentreDepthCm } = c.beam.setup;
+      if (isocentreDepthCm > total + 1e-9)
+        ctx.addIssue({
+          code: 'custom',
+          path: ['beam', 'setup', 'isocentreDepthCm'],
+          message: `isocentre depth ${isocentreDepthCm} cm is outside the phantom (0–${total.toFixed(2)} cm)`,
+        });
+      if (sadCm - isocentreDepthCm < LIMITS.minDistanceCm)
+        ctx.addIssue({
+          code: 'custom',
+          path: ['beam', 'setup', 'isocentreDepthCm'],
+          message: `SAD minus isocentre depth gives an SSD below ${LIMITS.minDistanceCm} cm`,
+        });
+    }
+  });
+
+export type LaminaCase = z.infer<typeof caseSchema>;
+export type CaseLayer = z.infer<typeof layerSchema>;
+export type CasePoint = z.infer<typeof pointSchema>;
+export type CaseBeam = z.infer<typeof beamSchema>;
