@@ -7,7 +7,14 @@ import prettier from 'eslint-config-prettier';
 import globals from 'globals';
 
 export default defineConfig(
-  globalIgnores(['dist', 'test-results', 'playwright-report', 'coverage', 'reports', 'bench/results.json']),
+  globalIgnores([
+    'dist',
+    'test-results',
+    'playwright-report',
+    'coverage',
+    'reports',
+    'bench/results.json',
+  ]),
   js.configs.recommended,
   tseslint.configs.recommendedTypeChecked,
   {

@@ -10,7 +10,11 @@ export default defineConfig({
   server: { host: '127.0.0.1' },
   preview: { host: '127.0.0.1', port: 4173, strictPort: false },
   test: {
-    include: ['tests/unit/**/*.test.ts', 'tests/validation/**/*.test.ts', 'tests/property/**/*.test.ts'],
+    include: [
+      'tests/unit/**/*.test.ts',
+      'tests/validation/**/*.test.ts',
+      'tests/property/**/*.test.ts',
+    ],
     environment: 'node',
     testTimeout: 60_000,
   },

@@ -17,7 +17,9 @@ function run(label, cmd, args, extraEnv = {}) {
   console.log(`\n== ${label} ==`);
   const r = spawnSync(cmd, args, { stdio: 'inherit', env: { ...env, ...extraEnv } });
   const ok = r.status === 0;
-  console.log(`== ${label}: ${ok ? 'ok' : 'FAILED'} (${((Date.now() - started) / 1000).toFixed(1)} s)`);
+  console.log(
+    `== ${label}: ${ok ? 'ok' : 'FAILED'} (${((Date.now() - started) / 1000).toFixed(1)} s)`,
+  );
   return ok;
 }
 
@@ -34,7 +36,9 @@ function ensureChromium() {
   const isRoot = typeof process.getuid === 'function' && process.getuid() === 0;
   const hasApt = spawnSync('sh', ['-c', 'command -v apt-get'], { stdio: 'ignore' }).status === 0;
   if (isRoot && hasApt) {
-    console.log(`Chromium not found at ${chromium}; installing Debian's chromium package (apt-get).`);
+    console.log(
+      `Chromium not found at ${chromium}; installing Debian's chromium package (apt-get).`,
+    );
     const ok =
       run('apt-get update', 'apt-get', ['update', '-qq']) &&
       run('apt-get install chromium', 'apt-get', ['install', '-y', '-qq', 'chromium'], {
@@ -66,7 +70,9 @@ try {
   passed += u.numPassedTests;
   failed += u.numFailedTests;
   // A file that fails to load has no tests but must still count as a failure.
-  const broken = (u.testResults ?? []).filter((f) => f.status === 'failed' && f.assertionResults.length === 0);
+  const broken = (u.testResults ?? []).filter(
+    (f) => f.status === 'failed' && f.assertionResults.length === 0,
+  );
   failed += broken.length;
   if (u.numFailedTests || broken.length) failures.push('unit tests');
 } catch {
@@ -82,11 +88,16 @@ else {
 }
 
 if (built && ensureChromium()) {
-  run('end-to-end (Playwright, Debian Chromium)', npx, ['playwright', 'test', '--reporter=list,json'], {
-    PLAYWRIGHT_JSON_OUTPUT_FILE: 'reports/e2e.json',
-    CHROMIUM_PATH: chromium,
-    E2E_SKIP_BUILD: '1',
-  });
+  run(
+    'end-to-end (Playwright, Debian Chromium)',
+    npx,
+    ['playwright', 'test', '--reporter=list,json'],
+    {
+      PLAYWRIGHT_JSON_OUTPUT_FILE: 'reports/e2e.json',
+      CHROMIUM_PATH: chromium,
+      E2E_SKIP_BUILD: '1',
+    },
+  );
   try {
     const e = JSON.parse(readFileSync('reports/e2e.json', 'utf8')).stats;
     passed += e.expected + e.flaky;
@@ -105,6 +116,8 @@ if (built && ensureChromium()) {
   failures.push(built ? 'end-to-end tests (no Chromium)' : 'end-to-end tests (no build)');
 }
 
-console.log(`\nSuite took ${((Date.now() - t0) / 1000).toFixed(0)} s.${failures.length ? ' Failed: ' + failures.join(', ') : ''}`);
+console.log(
+  `\nSuite took ${((Date.now() - t0) / 1000).toFixed(0)} s.${failures.length ? ' Failed: ' + failures.join(', ') : ''}`,
+);
 console.log(`${passed} passed, ${failed} failed`);
 process.exit(failed > 0 || passed === 0 ? 1 : 0);

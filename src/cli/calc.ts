@@ -35,7 +35,13 @@ function main(argv: string[]): number {
     return 2;
   }
   const methodsFlag = args.flags.get('methods');
-  const methods = typeof methodsFlag === 'string' ? methodsFlag.split(',').map((s) => s.trim()).filter(Boolean) : undefined;
+  const methods =
+    typeof methodsFlag === 'string'
+      ? methodsFlag
+          .split(',')
+          .map((s) => s.trim())
+          .filter(Boolean)
+      : undefined;
   const report = calculateCase(parsed.value, methods ? { methods } : {});
   if (args.flags.get('json') === true) process.stdout.write(`${JSON.stringify(report, null, 2)}\n`);
   else process.stdout.write(`${formatReport(report)}\n`);

@@ -11,7 +11,11 @@ function num(v: number | null | undefined, digits: number): string {
 
 export function table(headers: string[], rows: string[][]): string {
   const widths = headers.map((h, i) => Math.max(h.length, ...rows.map((r) => (r[i] ?? '').length)));
-  const line = (cells: string[]) => cells.map((c, i) => pad(c, widths[i] ?? 0)).join('  ').trimEnd();
+  const line = (cells: string[]) =>
+    cells
+      .map((c, i) => pad(c, widths[i] ?? 0))
+      .join('  ')
+      .trimEnd();
   return [line(headers), line(widths.map((w) => '-'.repeat(w))), ...rows.map(line)].join('\n');
 }
 
@@ -42,12 +46,19 @@ export function formatReport(r: CalcReport): string {
   out.push(
     table(
       ['id', 'depth cm', 'radiological depth cm', 'layer'],
-      r.points.map((p) => [p.id, num(p.depthCm, 2), num(p.radiologicalDepthCm, 3), String(p.layerIndex + 1)]),
+      r.points.map((p) => [
+        p.id,
+        num(p.depthCm, 2),
+        num(p.radiologicalDepthCm, 3),
+        String(p.layerIndex + 1),
+      ]),
     ),
   );
   for (const m of r.methods) {
     out.push('');
-    out.push(`Method ${m.id}: ${m.label} [${m.variant}] (${m.methodClass}; water data: ${m.waterData})`);
+    out.push(
+      `Method ${m.id}: ${m.label} [${m.variant}] (${m.methodClass}; water data: ${m.waterData})`,
+    );
     out.push(
       table(
         ['point', 'depth cm', 'CF', 'dose/MU cGy', '1 sigma cGy', 'flags'],

@@ -16,13 +16,18 @@ export const computeApi = {
   radiologicalDepthCurve(layers: LayerSpec[], stepCm = 0.05): RadiologicalCurve {
     const phantom = makeSlabPhantom(layers);
     const grid = depthGridCm(phantom.totalThicknessCm, stepCm);
-    return { depthCm: grid, radiologicalDepthCm: Array.from(radiologicalDepthCurve(phantom, grid)) };
+    return {
+      depthCm: grid,
+      radiologicalDepthCm: Array.from(radiologicalDepthCurve(phantom, grid)),
+    };
   },
   /** Validate and calculate a case; invalid input comes back as problems, never as a throw. */
   calculate(
     raw: unknown,
     options: CalcOptions = {},
-  ): { ok: true; report: CalcReport } | { ok: false; problems: { path: string; message: string }[] } {
+  ):
+    | { ok: true; report: CalcReport }
+    | { ok: false; problems: { path: string; message: string }[] } {
     const v = validateCase(raw);
     if (!v.ok) return v;
     return { ok: true, report: calculateCase(v.value, options) };

@@ -9,7 +9,8 @@ export interface CaseProblem {
   message: string;
 }
 
-export type CaseParseResult = { ok: true; value: LaminaCase } | { ok: false; problems: CaseProblem[] };
+export type CaseParseResult =
+  { ok: true; value: LaminaCase } | { ok: false; problems: CaseProblem[] };
 
 export function formatPath(path: readonly PropertyKey[]): string {
   if (path.length === 0) return '(file)';
@@ -26,7 +27,10 @@ export function validateCase(raw: unknown): CaseParseResult {
   if (r.success) return { ok: true, value: r.data };
   return {
     ok: false,
-    problems: r.error.issues.map((issue) => ({ path: formatPath(issue.path), message: issue.message })),
+    problems: r.error.issues.map((issue) => ({
+      path: formatPath(issue.path),
+      message: issue.message,
+    })),
   };
 }
 
@@ -36,7 +40,10 @@ export function parseCaseText(text: string): CaseParseResult {
   try {
     raw = JSON.parse(text);
   } catch (e) {
-    return { ok: false, problems: [{ path: '(file)', message: `not valid JSON: ${(e as Error).message}` }] };
+    return {
+      ok: false,
+      problems: [{ path: '(file)', message: `not valid JSON: ${(e as Error).message}` }],
+    };
   }
   return validateCase(raw);
 }

@@ -13,15 +13,28 @@ export type MigrationResult = { ok: true; value: unknown } | { ok: false; proble
 
 export function migrateCase(raw: unknown): MigrationResult {
   if (typeof raw !== 'object' || raw === null || Array.isArray(raw))
-    return { ok: false, problems: [{ path: '(file)', message: 'a case file must be a JSON object' }] };
+    return {
+      ok: false,
+      problems: [{ path: '(file)', message: 'a case file must be a JSON object' }],
+    };
   const doc = raw as Record<string, unknown>;
   if (doc.format !== CASE_FORMAT)
     return {
       ok: false,
-      problems: [{ path: 'format', message: `format must be "${CASE_FORMAT}" (found ${JSON.stringify(doc.format)})` }],
+      problems: [
+        {
+          path: 'format',
+          message: `format must be "${CASE_FORMAT}" (found ${JSON.stringify(doc.format)})`,
+        },
+      ],
     };
   const version = doc.version;
-  if (typeof version !== 'number' || !Number.isInteger(version) || version < 1 || version > CASE_VERSION)
+  if (
+    typeof version !== 'number' ||
+    !Number.isInteger(version) ||
+    version < 1 ||
+    version > CASE_VERSION
+  )
     return {
       ok: false,
       problems: [
@@ -34,7 +47,11 @@ export function migrateCase(raw: unknown): MigrationResult {
   let current = doc;
   for (let v = version; v < CASE_VERSION; v++) {
     const step = MIGRATIONS[v];
-    if (!step) return { ok: false, problems: [{ path: 'version', message: `no migration from version ${v}` }] };
+    if (!step)
+      return {
+        ok: false,
+        problems: [{ path: 'version', message: `no migration from version ${v}` }],
+      };
     current = { ...step(current), version: v + 1 };
   }
   return { ok: true, value: current };

@@ -29,10 +29,16 @@ export const layerSchema = z.strictObject({
   }),
   thicknessCm: finite('thickness')
     .refine((v) => v > 0, 'thickness must be > 0 cm')
-    .refine((v) => v <= LIMITS.maxLayerThicknessCm, `thickness must be ≤ ${LIMITS.maxLayerThicknessCm} cm`),
+    .refine(
+      (v) => v <= LIMITS.maxLayerThicknessCm,
+      `thickness must be ≤ ${LIMITS.maxLayerThicknessCm} cm`,
+    ),
   densityGPerCm3: finite('density')
     .refine((v) => v > 0, 'density must be > 0 g/cm³')
-    .refine((v) => v <= LIMITS.maxDensityGPerCm3, `density must be ≤ ${LIMITS.maxDensityGPerCm3} g/cm³`)
+    .refine(
+      (v) => v <= LIMITS.maxDensityGPerCm3,
+      `density must be ≤ ${LIMITS.maxDensityGPerCm3} g/cm³`,
+    )
     .optional(),
   label: z.string().max(80, 'label must be at most 80 characters').optional(),
 });
@@ -54,7 +60,10 @@ export const setupSchema = z.discriminatedUnion(
     z.strictObject({
       kind: z.literal('SAD'),
       sadCm: distance('SAD'),
-      isocentreDepthCm: finite('isocentre depth').refine((v) => v >= 0, 'isocentre depth must be ≥ 0 cm'),
+      isocentreDepthCm: finite('isocentre depth').refine(
+        (v) => v >= 0,
+        'isocentre depth must be ≥ 0 cm',
+      ),
     }),
   ],
   { error: 'set-up kind must be "SSD" or "SAD"' },
@@ -78,9 +87,13 @@ export const pointSchema = z.strictObject({
     .max(40, 'point id must be at most 40 characters'),
   depthCm: finite('depth').refine((v) => v >= 0, 'depth must be ≥ 0 cm'),
   /** Dose per fraction from the planning system at this point (cGy), for comparison. */
-  planningDoseCGy: finite('planning dose').refine((v) => v >= 0, 'planning dose must be ≥ 0 cGy').optional(),
+  planningDoseCGy: finite('planning dose')
+    .refine((v) => v >= 0, 'planning dose must be ≥ 0 cGy')
+    .optional(),
   /** Monitor units from the planning system for this beam, for comparison. */
-  planningMu: finite('planning MU').refine((v) => v > 0, 'planning MU must be > 0').optional(),
+  planningMu: finite('planning MU')
+    .refine((v) => v > 0, 'planning MU must be > 0')
+    .optional(),
 });
 
 export const caseSchema = z
@@ -117,7 +130,11 @@ export const caseSchema = z
     const seen = new Set<string>();
     c.points.forEach((p, i) => {
       if (seen.has(p.id))
-        ctx.addIssue({ code: 'custom', path: ['points', i, 'id'], message: `duplicate point id "${p.id}"` });
+        ctx.addIssue({
+          code: 'custom',
+          path: ['points', i, 'id'],
+          message: `duplicate point id "${p.id}"`,
+        });
       seen.add(p.id);
     });
     if (c.beam.setup.kind === 'SAD') {

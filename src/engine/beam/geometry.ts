@@ -5,8 +5,7 @@
 export const FIELD_DEFINITION_DISTANCE_CM = 100;
 
 export type Setup =
-  | { kind: 'SSD'; ssdCm: number }
-  | { kind: 'SAD'; sadCm: number; isocentreDepthCm: number };
+  { kind: 'SSD'; ssdCm: number } | { kind: 'SAD'; sadCm: number; isocentreDepthCm: number };
 
 /** Source-to-surface distance (cm) of a set-up. SAD: SSD = SAD − depth of the isocentre. */
 export function ssdCmOf(setup: Setup): number {

@@ -22,7 +22,9 @@ export const PHOTON_COEFFICIENT_SOURCE = MU.source;
 function mixed(table: CoefficientTable, id: MaterialId, energyMeV: number): number {
   let sum = 0;
   for (const part of getMaterial(id).coefficients) {
-    sum += part.massFraction * logLogInterpolate(table.energyMeV, table.materials[part.table], energyMeV);
+    sum +=
+      part.massFraction *
+      logLogInterpolate(table.energyMeV, table.materials[part.table], energyMeV);
   }
   return sum;
 }

@@ -63,7 +63,12 @@ export function makeSlabPhantom(specs: readonly LayerSpec[]): SlabPhantom {
     radiological[i + 1] = radTop;
     top = bottom;
   });
-  return { layers, boundariesCm: boundaries, radiologicalBoundariesCm: radiological, totalThicknessCm: top };
+  return {
+    layers,
+    boundariesCm: boundaries,
+    radiologicalBoundariesCm: radiological,
+    totalThicknessCm: top,
+  };
 }
 
 /** A phantom of water only, `thicknessCm` deep. */
@@ -81,7 +86,9 @@ export function isInsidePhantom(phantom: SlabPhantom, depthCm: number): boolean 
  */
 export function layerIndexAtDepth(phantom: SlabPhantom, depthCm: number): number {
   if (!isInsidePhantom(phantom, depthCm))
-    throw new RangeError(`depth ${depthCm} cm lies outside the phantom (0–${phantom.totalThicknessCm} cm)`);
+    throw new RangeError(
+      `depth ${depthCm} cm lies outside the phantom (0–${phantom.totalThicknessCm} cm)`,
+    );
   const b = phantom.boundariesCm;
   const n = phantom.layers.length;
   for (let i = 0; i < n; i++) {
@@ -107,7 +114,9 @@ export function cumulativeMassThicknessGPerCm2(phantom: SlabPhantom, depthCm: nu
     sum += l.densityGPerCm3 * l.thicknessCm;
   }
   const layer = phantom.layers[i] as SlabLayer;
-  return sum + layer.densityGPerCm3 * Math.min(Math.max(depthCm - layer.topCm, 0), layer.thicknessCm);
+  return (
+    sum + layer.densityGPerCm3 * Math.min(Math.max(depthCm - layer.topCm, 0), layer.thicknessCm)
+  );
 }
 
 /**
@@ -127,7 +136,9 @@ export function radiologicalDistanceCm(
     const layer = phantom.layers[layerIndexAtDepth(phantom, depthACm)] as SlabLayer;
     return layer.relativeElectronDensity * geometric;
   }
-  const radial = Math.abs(radiologicalDepthCm(phantom, depthBCm) - radiologicalDepthCm(phantom, depthACm));
+  const radial = Math.abs(
+    radiologicalDepthCm(phantom, depthBCm) - radiologicalDepthCm(phantom, depthACm),
+  );
   return (geometric / dz) * radial;
 }
 
@@ -140,6 +151,7 @@ export function radiologicalDepthCurve(
   depthsCm: ArrayLike<number>,
   out: Float64Array = new Float64Array(depthsCm.length),
 ): Float64Array {
-  for (let k = 0; k < depthsCm.length; k++) out[k] = radiologicalDepthCm(phantom, depthsCm[k] as number);
+  for (let k = 0; k < depthsCm.length; k++)
+    out[k] = radiologicalDepthCm(phantom, depthsCm[k] as number);
   return out;
 }
