@@ -14,11 +14,7 @@ interface StoppingColumns {
 }
 
 const WATER = waterTable as StoppingColumns & { kineticEnergyMeV: number[]; source: string };
-const OTHER = otherTable as {
-  source: string;
-  kineticEnergyMeV: number[];
-  media: Record<Exclude<StoppingTableId, 'water'>, StoppingColumns>;
-};
+const OTHER = otherTable;
 
 export const ESTAR_SOURCE = `${WATER.source}; ${OTHER.source}`;
 export const ESTAR_MIN_MEV = WATER.kineticEnergyMeV[0] as number;

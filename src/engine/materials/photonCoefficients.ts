@@ -12,8 +12,8 @@ interface CoefficientTable {
   materials: Record<CoefficientTableId, number[]>;
 }
 
-const MU = muTable as CoefficientTable;
-const MU_EN = muEnTable as CoefficientTable;
+const MU = muTable;
+const MU_EN = muEnTable;
 
 export const PHOTON_TABLE_MIN_MEV = MU.energyMeV[0] as number;
 export const PHOTON_TABLE_MAX_MEV = MU.energyMeV[MU.energyMeV.length - 1] as number;
