@@ -1,0 +1,70 @@
+// One calculation of a plan: every beam's case through calculateCase, then the point check
+// (MU for the prescription, differences from the planning system, verdicts, sums over beams).
+// Plain serialisable data; runs in a worker, on the main thread and in Node.
+import { calculateCase, type CalcOptions, type CalcReport } from './calculateCase';
+import { checkPlan, type CheckBeamInput, type PlanCheck } from '../engine/check/planCheck';
+import { DEFAULT_TOLERANCES, type Tolerances } from '../engine/check/tolerance';
+import type { LaminaPlan } from '../io/planFile';
+
+export interface PlanCalcOptions extends CalcOptions {
+  /** Overrides the plan's tolerances (e.g. edited on the page). */
+  tolerances?: Tolerances;
+  /** Overrides the plan's decisive method. */
+  checkMethodId?: string;
+}
+
+export interface PlanBeamReport {
+  id: string;
+  label: string;
+  weight: number;
+  report: CalcReport;
+}
+
+export interface PlanReport {
+  format: 'lamina.plancalc';
+  version: 1;
+  planName: string;
+  beams: PlanBeamReport[];
+  check: PlanCheck;
+}
+
+/** The check's view of one calculated beam. */
+export function checkInputOf(
+  beam: { id: string; label: string; weight: number },
+  c: LaminaPlan['beams'][number]['case'],
+  report: CalcReport,
+): CheckBeamInput {
+  return {
+    id: beam.id,
+    label: beam.label,
+    weight: beam.weight,
+    layers: report.layers,
+    points: c.points,
+    methods: report.methods.map((m) => ({
+      id: m.id,
+      label: m.label,
+      points: m.points.map((p) => ({ id: p.id, dosePerMuCGy: p.dosePerMuCGy })),
+    })),
+  };
+}
+
+export function calculatePlan(plan: LaminaPlan, options: PlanCalcOptions = {}): PlanReport {
+  const { tolerances, checkMethodId, ...calcOptions } = options;
+  const beams = plan.beams.map((b) => ({
+    id: b.id,
+    label: b.label || b.case.name || b.id,
+    weight: b.weight,
+    report: calculateCase(b.case, calcOptions),
+  }));
+  const check = checkPlan(
+    beams.map((b, i) =>
+      checkInputOf(b, (plan.beams[i] as LaminaPlan['beams'][number]).case, b.report),
+    ),
+    {
+      tolerances: tolerances ?? plan.tolerances ?? DEFAULT_TOLERANCES,
+      prescription: plan.prescription,
+      decisiveMethodId: checkMethodId ?? plan.checkMethodId,
+    },
+  );
+  return { format: 'lamina.plancalc', version: 1, planName: plan.name, beams, check };
+}

@@ -1,0 +1,111 @@
+// Reading and writing plan files. A plan's beams embed whole case documents, each validated (and
+// migrated) by the case rules, so a problem is reported with its full path, e.g.
+// "beams[1].case.layers[0].thicknessCm". A single-beam case file opens as a one-beam plan.
+import { formatPath, validateCase, type CaseProblem } from './caseFile';
+import { CASE_FORMAT, type LaminaCase } from './caseSchema';
+import {
+  PLAN_FORMAT,
+  PLAN_VERSION,
+  planShellSchema,
+  type PlanPrescription,
+  type PlanTolerances,
+} from './planSchema';
+
+export interface PlanBeam {
+  id: string;
+  label?: string | undefined;
+  weight: number;
+  case: LaminaCase;
+}
+
+export interface LaminaPlan {
+  format: typeof PLAN_FORMAT;
+  version: typeof PLAN_VERSION;
+  name: string;
+  notes?: string | undefined;
+  beams: PlanBeam[];
+  prescription?: PlanPrescription | undefined;
+  tolerances?: PlanTolerances | undefined;
+  checkMethodId?: string | undefined;
+}
+
+export type PlanParseResult =
+  { ok: true; value: LaminaPlan } | { ok: false; problems: CaseProblem[] };
+
+/** A one-beam plan around a single-beam case (weight 1, no prescription). */
+export function planOfCase(c: LaminaCase): LaminaPlan {
+  return {
+    format: PLAN_FORMAT,
+    version: PLAN_VERSION,
+    name: c.name,
+    beams: [{ id: 'beam-1', weight: 1, case: c }],
+  };
+}
+
+function validatePlanDocument(raw: unknown): PlanParseResult {
+  const shell = planShellSchema.safeParse(raw);
+  if (!shell.success)
+    return {
+      ok: false,
+      problems: shell.error.issues.map((i) => ({ path: formatPath(i.path), message: i.message })),
+    };
+  const problems: CaseProblem[] = [];
+  const beams: PlanBeam[] = [];
+  shell.data.beams.forEach((b, i) => {
+    const c = validateCase(b.case);
+    if (!c.ok) {
+      for (const p of c.problems)
+        problems.push({
+          path: `beams[${i}].case${p.path === '(file)' ? '' : p.path.startsWith('[') ? p.path : `.${p.path}`}`,
+          message: p.message,
+        });
+    } else beams.push({ ...b, case: c.value });
+  });
+  const rx = shell.data.prescription;
+  if (
+    rx &&
+    problems.length === 0 &&
+    !beams.some((b) => b.case.points.some((p) => p.id === rx.pointId))
+  )
+    problems.push({ path: 'prescription.pointId', message: `no beam has a point "${rx.pointId}"` });
+  if (problems.length > 0) return { ok: false, problems };
+  return { ok: true, value: { ...shell.data, beams } };
+}
+
+/**
+ * Validate a parsed JSON document as a plan: a "lamina.plan" document, or a "lamina.case"
+ * document (any readable version), which becomes a one-beam plan.
+ */
+export function validatePlan(raw: unknown): PlanParseResult {
+  if (
+    typeof raw === 'object' &&
+    raw !== null &&
+    (raw as { format?: unknown }).format === CASE_FORMAT
+  ) {
+    const c = validateCase(raw);
+    return c.ok ? { ok: true, value: planOfCase(c.value) } : c;
+  }
+  return validatePlanDocument(raw);
+}
+
+export function parsePlanText(text: string): PlanParseResult {
+  let raw: unknown;
+  try {
+    raw = JSON.parse(text);
+  } catch (e) {
+    return {
+      ok: false,
+      problems: [{ path: '(file)', message: `not valid JSON: ${(e as Error).message}` }],
+    };
+  }
+  return validatePlan(raw);
+}
+
+export function serializePlan(p: LaminaPlan): string {
+  return `${JSON.stringify({ ...p, format: PLAN_FORMAT, version: PLAN_VERSION }, null, 2)}\n`;
+}
+
+/** True when a plan is just one beam around a case with nothing plan-specific (save it as a case). */
+export function isPlainCase(p: LaminaPlan): boolean {
+  return p.beams.length === 1 && !p.prescription && !p.tolerances && !p.checkMethodId;
+}
