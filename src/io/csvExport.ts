@@ -1,0 +1,96 @@
+// CSV exports of a calculation: the depth curves of every method and the point-check tables
+// (per beam and total). Numbers are written at full precision so the files parse back exactly;
+// a missing value is an empty cell.
+import Papa from 'papaparse';
+import type { CalcReport } from '../compute/calculateCase';
+import type { PlanCheck } from '../engine/check/planCheck';
+
+type Cell = string | number | null;
+
+const cell = (v: number | null | undefined): Cell =>
+  v === null || v === undefined || !Number.isFinite(v) ? null : v;
+
+export function toCsv(fields: string[], rows: Cell[][]): string {
+  return Papa.unparse({ fields, data: rows.map((r) => r.map((c) => (c === null ? '' : c))) });
+}
+
+/** One row per depth: geometric and radiological depth, then dose per MU and CF of each method. */
+export function curvesCsv(report: CalcReport): string {
+  const fields = ['depth_cm', 'radiological_depth_cm'];
+  for (const m of report.methods) fields.push(`${m.id}_dose_per_mu_cgy`, `${m.id}_cf`);
+  const rows = report.depthCm.map((d, i) => {
+    const row: Cell[] = [d, cell(report.radiologicalDepthCm[i])];
+    for (const m of report.methods) row.push(cell(m.curve.dosePerMuCGy[i]), cell(m.curve.cf[i]));
+    return row;
+  });
+  return toCsv(fields, rows);
+}
+
+export const POINT_CHECK_FIELDS = [
+  'beam',
+  'point',
+  'depth_cm',
+  'method',
+  'dose_per_mu_cgy',
+  'prescribed_dose_cgy',
+  'check_mu',
+  'planning_mu',
+  'mu_diff_percent',
+  'dose_for_planning_mu_cgy',
+  'planning_dose_cgy',
+  'dose_diff_percent',
+  'tolerance_percent',
+  'verdict',
+];
+
+/** One row per beam, point and method. */
+export function pointCheckCsv(check: PlanCheck): string {
+  const rows: Cell[][] = [];
+  for (const b of check.beams)
+    for (const p of b.points)
+      for (const m of p.methods)
+        rows.push([
+          b.id,
+          p.pointId,
+          p.depthCm,
+          m.methodId,
+          cell(m.dosePerMuCGy),
+          cell(p.prescribedDoseCGy),
+          cell(m.mu),
+          cell(p.planningMu),
+          cell(m.muDiffPercent),
+          cell(m.doseCGy),
+          cell(p.planningDoseCGy),
+          cell(m.doseDiffPercent),
+          p.tolerancePercent,
+          m.verdict,
+        ]);
+  return toCsv(POINT_CHECK_FIELDS, rows);
+}
+
+export const TOTAL_CHECK_FIELDS = [
+  'point',
+  'method',
+  'dose_cgy',
+  'planning_dose_cgy',
+  'diff_percent',
+  'tolerance_percent',
+  'verdict',
+];
+
+/** One row per shared point and method: dose summed over beams. */
+export function totalCheckCsv(check: PlanCheck): string {
+  const rows: Cell[][] = [];
+  for (const t of check.totals)
+    for (const m of t.methods)
+      rows.push([
+        t.pointId,
+        m.methodId,
+        cell(m.doseCGy),
+        cell(t.planningDoseCGy),
+        cell(m.diffPercent),
+        t.tolerancePercent,
+        m.verdict,
+      ]);
+  return toCsv(TOTAL_CHECK_FIELDS, rows);
+}

@@ -1,0 +1,86 @@
+import { readFileSync } from 'node:fs';
+import Papa from 'papaparse';
+import { describe, expect, it } from 'vitest';
+import { calculateCase } from '../../../src/compute/calculateCase';
+import { checkPlan } from '../../../src/engine/check/planCheck';
+import { DEFAULT_TOLERANCES } from '../../../src/engine/check/tolerance';
+import { parseCaseText } from '../../../src/io/caseFile';
+import {
+  curvesCsv,
+  pointCheckCsv,
+  POINT_CHECK_FIELDS,
+  totalCheckCsv,
+} from '../../../src/io/csvExport';
+import type { MethodResult } from '../../../src/engine/methodResult';
+
+const parsed = parseCaseText(readFileSync('public/cases/lung-slab-6mv.json', 'utf8'));
+if (!parsed.ok) throw new Error('demo case must be valid');
+
+function parse(text: string) {
+  return Papa.parse<Record<string, number | string | null>>(text, {
+    header: true,
+    dynamicTyping: true,
+    skipEmptyLines: true,
+  });
+}
+
+describe('CSV exports', () => {
+  it('curvesCsv(report) parses back to the same depths and method values', () => {
+    const report = calculateCase(parsed.value, { depthStepCm: 0.5 });
+    // An exporter test: a synthetic method curve (1/(1+d)) with one missing value.
+    const m: MethodResult = {
+      id: 'synthetic',
+      label: 'synthetic',
+      variant: '',
+      methodClass: 'none',
+      waterData: 'none',
+      curve: {
+        depthCm: report.depthCm,
+        dosePerMuCGy: report.depthCm.map((d, i) => (i === 3 ? null : 1 / (1 + d))),
+        cf: report.depthCm.map(() => 1),
+      },
+      points: [],
+    };
+    const withMethod = { ...report, methods: [m] };
+    const back = parse(curvesCsv(withMethod));
+    expect(back.meta.fields).toEqual([
+      'depth_cm',
+      'radiological_depth_cm',
+      'synthetic_dose_per_mu_cgy',
+      'synthetic_cf',
+    ]);
+    expect(back.data).toHaveLength(report.depthCm.length);
+    back.data.forEach((row, i) => {
+      expect(row.depth_cm).toBe(report.depthCm[i]);
+      expect(row.radiological_depth_cm).toBe(report.radiologicalDepthCm[i]);
+      expect(row.synthetic_dose_per_mu_cgy).toBe(m.curve.dosePerMuCGy[i]);
+    });
+  });
+
+  it('pointCheckCsv(check) and totalCheckCsv(check) parse back to the check values', () => {
+    const beam = (id: string, dpm: number) => ({
+      id,
+      label: id,
+      weight: 1,
+      layers: [{ topCm: 0, bottomCm: 20, relativeElectronDensity: 1 }],
+      points: [{ id: 'P', depthCm: 10, planningMu: 120, planningDoseCGy: 100 }],
+      methods: [{ id: 'water', label: 'water', points: [{ id: 'P', dosePerMuCGy: dpm }] }],
+    });
+    const check = checkPlan([beam('AP', 0.81), beam('PA', 0.79)], {
+      tolerances: DEFAULT_TOLERANCES,
+      prescription: { pointId: 'P', doseCGy: 200 },
+    });
+    const rows = parse(pointCheckCsv(check));
+    expect(rows.meta.fields).toEqual(POINT_CHECK_FIELDS);
+    expect(rows.data).toHaveLength(2);
+    const pa = rows.data[1];
+    const expected = check.beams[1]?.points[0]?.methods[0];
+    expect(pa?.beam).toBe('PA');
+    expect(pa?.check_mu).toBe(expected?.mu);
+    expect(pa?.mu_diff_percent).toBe(expected?.muDiffPercent);
+    expect(pa?.verdict).toBe(expected?.verdict);
+    const totals = parse(totalCheckCsv(check));
+    expect(totals.data[0]?.dose_cgy).toBe(check.totals[0]?.methods[0]?.doseCGy);
+    expect(totals.data[0]?.planning_dose_cgy).toBe(200);
+  });
+});
