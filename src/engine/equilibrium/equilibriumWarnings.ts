@@ -1,0 +1,117 @@
+// All equilibrium and validity warnings for one beam on one slab phantom, sorted by depth.
+// Rules: build-up, interface bands, unshifted Batho, lateral disequilibrium, cavities, dense
+// layers, high-energy small fields in lung, and table extrapolation.
+import type { BeamEnergy } from '../beam/energies';
+import type { MethodResult } from '../methodResult';
+import type { SlabPhantom } from '../phantom/slabPhantom';
+import { typicalBeamQuality } from './beamQuality';
+import { buildupWarnings, unshiftedBathoWarnings } from './buildupRules';
+import { highDensityWarnings, lowDensityWarnings } from './densityRules';
+import { extrapolationWarnings, type ExtrapolationEvent } from './extrapolationRules';
+import { interfaceWarnings } from './interfaceRules';
+import { highEnergySmallFieldLungWarnings, ledWarnings } from './lateralRules';
+import type { RuleContext } from './ruleContext';
+import { SEVERITY_RANK, type Warning } from './warning';
+
+export interface EquilibriumInput {
+  phantom: SlabPhantom;
+  beam: {
+    energy: BeamEnergy;
+    ssdCm: number;
+    /** Field sides defined at 100 cm from the source (cm). */
+    fieldXCm: number;
+    fieldYCm: number;
+  };
+  /** Depth of dose maximum (cm) from the water data in use; typical for the energy when absent. */
+  dMaxCm?: number | undefined;
+  /** TPR20,10 from the water data in use; typical for the energy when absent. */
+  tpr2010?: number | undefined;
+  /** Where dMaxCm and tpr2010 come from (e.g. "water data: modelled beam"). */
+  qualitySource?: string | undefined;
+  points?: readonly { id: string; depthCm: number }[];
+  extrapolations?: readonly ExtrapolationEvent[];
+}
+
+export function ruleContextOf(input: EquilibriumInput): RuleContext {
+  const typical = typicalBeamQuality(input.beam.energy);
+  const haveD = input.dMaxCm !== undefined && input.dMaxCm > 0;
+  const haveT = input.tpr2010 !== undefined && input.tpr2010 > 0;
+  const given = input.qualitySource ?? 'water data';
+  const source =
+    haveD && haveT
+      ? given
+      : haveD || haveT
+        ? `${haveD ? 'd_max' : 'TPR20,10'} from ${given}, ${haveD ? 'TPR20,10' : 'd_max'} ${typical.source}`
+        : typical.source;
+  return {
+    phantom: input.phantom,
+    energy: input.beam.energy,
+    ssdCm: input.beam.ssdCm,
+    fieldXCm: input.beam.fieldXCm,
+    fieldYCm: input.beam.fieldYCm,
+    quality: {
+      dMaxCm: haveD ? (input.dMaxCm as number) : typical.dMaxCm,
+      tpr2010: haveT ? (input.tpr2010 as number) : typical.tpr2010,
+      source,
+    },
+    points: input.points ?? [],
+  };
+}
+
+export function equilibriumWarnings(input: EquilibriumInput): Warning[] {
+  const ctx = ruleContextOf(input);
+  const all = [
+    ...buildupWarnings(ctx),
+    ...interfaceWarnings(ctx),
+    ...unshiftedBathoWarnings(ctx),
+    ...ledWarnings(ctx),
+    ...lowDensityWarnings(ctx),
+    ...highDensityWarnings(ctx),
+    ...highEnergySmallFieldLungWarnings(ctx),
+    ...extrapolationWarnings(ctx, input.extrapolations ?? []),
+  ];
+  // Ids stay unique even when one rule raises two bands anchored on the same layer.
+  const seen = new Map<string, number>();
+  for (const w of all) {
+    const n = (seen.get(w.id) ?? 0) + 1;
+    seen.set(w.id, n);
+    if (n > 1) w.id = `${w.id}#${n}`;
+  }
+  return all.sort(
+    (a, b) =>
+      a.depthRangeCm.fromCm - b.depthRangeCm.fromCm ||
+      SEVERITY_RANK[b.severity] - SEVERITY_RANK[a.severity] ||
+      a.id.localeCompare(b.id),
+  );
+}
+
+/**
+ * Extrapolation events from the flags methods put on their points: any flag mentioning
+ * "extrapolat" or "clamp" counts (a "field" flag as a field look-up, otherwise a depth look-up).
+ */
+export function extrapolationEventsOfMethods(
+  methods: readonly MethodResult[],
+): ExtrapolationEvent[] {
+  const out: ExtrapolationEvent[] = [];
+  for (const m of methods) {
+    for (const p of m.points) {
+      for (const flag of p.flags) {
+        const f = flag.toLowerCase();
+        if (!f.includes('extrapolat') && !f.includes('clamp')) continue;
+        out.push({
+          methodId: m.id,
+          depthCm: p.depthCm,
+          quantity: f.includes('field') ? 'field' : 'depth',
+        });
+      }
+    }
+  }
+  return out;
+}
+
+/** Warnings whose depth range holds a depth (cm). */
+export function warningsAtDepth(warnings: readonly Warning[], depthCm: number): Warning[] {
+  return warnings.filter(
+    (w) => depthCm >= w.depthRangeCm.fromCm - 1e-9 && depthCm <= w.depthRangeCm.toCm + 1e-9,
+  );
+}

@@ -1,0 +1,73 @@
+// EXTRAPOLATION: a water-table look-up fell outside the tabulated depths or fields and was
+// clamped to the edge (reported by the look-ups through a LookupRecorder, or as point flags).
+// One warning per method and quantity, spanning the depths where it happened.
+import type { ExtrapolationFlag } from '../beam/waterData';
+import { warningOverBand, type RuleContext } from './ruleContext';
+import { fmt, methodScope, type Warning } from './warning';
+
+export interface ExtrapolationEvent {
+  /** Method whose look-up clamped (a MethodResult id). */
+  methodId: string;
+  /** Geometric depth of the calculation point (cm). */
+  depthCm: number;
+  quantity: ExtrapolationFlag['quantity'];
+  /** What was asked for and what the table gave (absent when only a flag string is known). */
+  requested?: number;
+  clampedTo?: number;
+}
+
+/** Caution when a request lies further than this fraction beyond the table's edge. */
+export const EXTRAPOLATION_CAUTION_FRACTION = 0.1;
+
+export function extrapolationWarnings(
+  ctx: RuleContext,
+  events: readonly ExtrapolationEvent[],
+): Warning[] {
+  const groups = new Map<string, ExtrapolationEvent[]>();
+  for (const e of events) {
+    if (!Number.isFinite(e.depthCm)) continue;
+    const key = `${e.methodId}|${e.quantity}`;
+    const list = groups.get(key) ?? [];
+    list.push(e);
+    groups.set(key, list);
+  }
+  const out: Warning[] = [];
+  for (const list of groups.values()) {
+    const first = list[0];
+    if (!first) continue;
+    const depths = list.map((e) => e.depthCm);
+    let worstFraction = 0;
+    let worst: ExtrapolationEvent | undefined;
+    for (const e of list) {
+      if (e.requested === undefined || e.clampedTo === undefined) continue;
+      const fraction = Math.abs(e.requested - e.clampedTo) / Math.max(Math.abs(e.clampedTo), 1e-9);
+      if (worst === undefined || fraction > worstFraction) {
+        worstFraction = fraction;
+        worst = e;
+      }
+    }
+    const unit = 'cm';
+    const detail = worst
+      ? `worst: ${first.quantity} ${fmt(worst.requested ?? 0)} ${unit} requested, table edge ${fmt(worst.clampedTo ?? 0)} ${unit} (${(100 * worstFraction).toFixed(0)} % beyond; caution > ${100 * EXTRAPOLATION_CAUTION_FRACTION} %)`
+      : 'values not reported';
+    const w = warningOverBand(
+      ctx,
+      { fromCm: Math.min(...depths), toCm: Math.max(...depths) },
+      {
+        id: `EXTRAPOLATION@${first.methodId}/${first.quantity}`,
+        code: 'EXTRAPOLATION',
+        severity: worstFraction > EXTRAPOLATION_CAUTION_FRACTION ? 'caution' : 'note',
+        methods: methodScope([first.methodId]),
+        numbers: `${list.length} ${first.quantity} look-up(s) by ${first.methodId} outside the water table; ${detail}`,
+        values: { events: list.length, worstFractionBeyond: worstFraction },
+        explanation:
+          'The water data do not cover this look-up, so the value was clamped to the table edge and the result rests on an extrapolation.',
+        advice:
+          'Extend the water table (deeper depths, smaller or larger fields) or treat these results as indicative only.',
+      },
+      true,
+    );
+    if (w) out.push(w);
+  }
+  return out;
+}
