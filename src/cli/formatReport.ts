@@ -1,6 +1,7 @@
 // Plain-text rendering of a calculation report for the terminal. Stable layout, documented in
 // the README: a header, the layer table, the point table, then one table per method.
 import type { CalcReport } from '../compute/calculateCase';
+import type { Warning } from '../engine/equilibrium';
 
 function pad(s: string, n: number): string {
   return s.length >= n ? s : s + ' '.repeat(n - s.length);
@@ -75,7 +76,42 @@ export function formatReport(r: CalcReport): string {
   }
   for (const u of r.unavailable) out.push(`\nMethod ${u.id}: not computed (${u.reason})`);
   out.push('');
+  out.push(...formatWarnings(r.warnings));
+  out.push('');
   out.push('Cautions');
   for (const c of r.cautions) out.push(`- ${c}`);
   return out.join('\n');
+}
+
+/**
+ * The "Warnings" section: a table (id, severity, depth range, points, methods) followed by the
+ * numbers, explanation and advice of each warning.
+ */
+export function formatWarnings(warnings: readonly Warning[]): string[] {
+  const out = ['Warnings'];
+  if (warnings.length === 0) {
+    out.push('(none)');
+    return out;
+  }
+  out.push(
+    table(
+      ['id', 'severity', 'depth cm', 'points', 'concerns', 'approximate', 'unaffected'],
+      warnings.map((w) => [
+        w.id,
+        w.severity,
+        `${num(w.depthRangeCm.fromCm, 2)}–${num(w.depthRangeCm.toCm, 2)}`,
+        w.pointIds.join(', '),
+        w.methods.concerned.join(', '),
+        w.methods.approximate.join(', '),
+        w.methods.unaffected.join(', '),
+      ]),
+    ),
+  );
+  for (const w of warnings) {
+    out.push('');
+    out.push(`${w.id} (${w.severity}): ${w.numbers}`);
+    out.push(`  ${w.explanation}`);
+    out.push(`  What to do: ${w.advice}`);
+  }
+  return out;
 }

@@ -10,6 +10,8 @@ import {
 } from '../engine/phantom/slabPhantom';
 import type { MethodResult } from '../engine/methodResult';
 import type { LaminaCase } from '../io/caseSchema';
+import type { Warning } from '../engine/equilibrium';
+import { caseWarnings } from './caseWarnings';
 
 export const CALC_FORMAT = 'lamina.calc';
 export const CALC_VERSION = 1;
@@ -51,7 +53,8 @@ export interface CalcReport {
   methods: MethodResult[];
   /** Method ids that were asked for but are not available, with the reason. */
   unavailable: { id: string; reason: string }[];
-  warnings: unknown[];
+  /** Equilibrium and validity warnings (src/engine/equilibrium), sorted by depth. */
+  warnings: Warning[];
   cautions: string[];
 }
 
@@ -119,7 +122,7 @@ export function calculateCase(c: LaminaCase, options: CalcOptions = {}): CalcRep
     radiologicalDepthCm: grid.map((d) => radiologicalDepthCm(phantom, d)),
     methods: [],
     unavailable,
-    warnings: [],
+    warnings: caseWarnings(c, phantom, []),
     cautions: [...CAUTIONS],
   };
 }
