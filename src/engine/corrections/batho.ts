@@ -1,0 +1,77 @@
+// Generalized Batho power law (Batho 1964; Sontag & Cunningham 1977; multi-layer form as in Webb &
+// Fox 1980; all from memory):
+//   CF = [(μ_en/ρ)_N/(μ_en/ρ)_w] · Π_{m=1..N} T(X_m + shift, s_d)^(ρ_m − ρ_{m−1}),
+// X_m = d − z_top,m, ρ = relative electron density (exponents by ρ_e, for Compton-dominated beams
+// μ_m/μ_w ≈ ρ_e,m), with the convention μ₀ ≡ μ_w (ρ₀ = 1) so homogeneous water gives CF = 1.
+import type { LookupRecorder, WaterData } from '../beam/waterData';
+import { layerIndexAtDepth, type SlabLayer, type SlabPhantom } from '../phantom/slabPhantom';
+import {
+  checkedCf,
+  collectingRecorder,
+  type CorrectionOptions,
+  type CorrectionResult,
+  type TypeAMethod,
+} from './correctionTypes';
+
+/** Product of the power-law factors; `depthFunction` is T(x) at the point's field. */
+export function bathoPowerLawProduct(
+  phantom: SlabPhantom,
+  pointDepthCm: number,
+  shiftCm: number,
+  depthFunction: (xCm: number) => number,
+): { product: number; smallestDistanceCm: number } {
+  const n = layerIndexAtDepth(phantom, pointDepthCm);
+  let product = 1;
+  let previousRho = 1;
+  let smallest = Infinity;
+  for (let m = 0; m <= n; m++) {
+    const layer = phantom.layers[m] as SlabLayer;
+    const exponent = layer.relativeElectronDensity - previousRho;
+    previousRho = layer.relativeElectronDensity;
+    if (exponent === 0) continue;
+    const xCm = pointDepthCm - layer.topCm;
+    smallest = Math.min(smallest, xCm);
+    product *= Math.pow(depthFunction(xCm + shiftCm), exponent);
+  }
+  return { product, smallestDistanceCm: smallest };
+}
+
+/** Dose-to-medium factor of the layer holding the point (1 = dose to water). */
+export function muEnFactor(
+  phantom: SlabPhantom,
+  pointDepthCm: number,
+  options: CorrectionOptions,
+): number {
+  if (!options.muEnRatioOfLayer) return 1;
+  return options.muEnRatioOfLayer(
+    phantom.layers[layerIndexAtDepth(phantom, pointDepthCm)] as SlabLayer,
+  );
+}
+
+function depthFunctionOf(
+  wd: WaterData,
+  sideAtDepthCm: number,
+  table: 'tmr' | 'tar',
+  recorder: LookupRecorder,
+): (xCm: number) => number {
+  const psf = table === 'tar' ? wd.psf(sideAtDepthCm, recorder) : 1;
+  return (xCm) => wd.tmr(xCm, sideAtDepthCm, recorder) * psf;
+}
+
+export const bathoMethod: TypeAMethod = {
+  id: 'batho',
+  label: 'Batho power law (generalized)',
+  variant: (o) =>
+    `${(o.bathoTable ?? 'tmr').toUpperCase()}, no shift, μ₀ ≡ water, exponents by ρ_e, ${o.muEnRatioOfLayer ? 'dose to medium' : 'dose to water'}`,
+  correct(phantom, pointDepthCm, sideAtDepthCm, wd, options): CorrectionResult {
+    const { recorder, flags } = collectingRecorder();
+    const t = depthFunctionOf(wd, sideAtDepthCm, options.bathoTable ?? 'tmr', recorder);
+    const { product, smallestDistanceCm } = bathoPowerLawProduct(phantom, pointDepthCm, 0, t);
+    const out = flags();
+    if (smallestDistanceCm < wd.dMaxCm)
+      out.push(
+        `unshifted Batho: ${smallestDistanceCm.toFixed(2)} cm from an interface < d_max (power law in the build-up region)`,
+      );
+    return checkedCf(product * muEnFactor(phantom, pointDepthCm, options), out);
+  },
+};
