@@ -85,9 +85,14 @@ export function equilibriumWarnings(input: EquilibriumInput): Warning[] {
   );
 }
 
+// "extrapolated: depth 0.30 cm outside the table, clamped to 0.5 cm" (the type-A look-up flags).
+const CLAMP_FLAG =
+  /(depth|field)\s+(-?[\d.]+(?:e[+-]?\d+)?)\s*cm\b.*clamped to\s+(-?[\d.]+(?:e[+-]?\d+)?)/i;
+
 /**
  * Extrapolation events from the flags methods put on their points: any flag mentioning
- * "extrapolat" or "clamp" counts (a "field" flag as a field look-up, otherwise a depth look-up).
+ * "extrapolat" or "clamp" counts (a "field" flag as a field look-up, otherwise a depth look-up);
+ * requested and table-edge values are read when the flag states them.
  */
 export function extrapolationEventsOfMethods(
   methods: readonly MethodResult[],
@@ -98,11 +103,15 @@ export function extrapolationEventsOfMethods(
       for (const flag of p.flags) {
         const f = flag.toLowerCase();
         if (!f.includes('extrapolat') && !f.includes('clamp')) continue;
-        out.push({
-          methodId: m.id,
-          depthCm: p.depthCm,
-          quantity: f.includes('field') ? 'field' : 'depth',
-        });
+        const match = CLAMP_FLAG.exec(flag);
+        const quantity = (match?.[1]?.toLowerCase() ??
+          (f.includes('field') ? 'field' : 'depth')) as 'depth' | 'field';
+        const event: ExtrapolationEvent = { methodId: m.id, depthCm: p.depthCm, quantity };
+        if (match) {
+          event.requested = Number(match[2]);
+          event.clampedTo = Number(match[3]);
+        }
+        out.push(event);
       }
     }
   }

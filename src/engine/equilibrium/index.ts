@@ -4,3 +4,4 @@ export * from './beamQuality';
 export * from './depthBands';
 export * from './extrapolationRules';
 export * from './equilibriumWarnings';
+export * from './methodFlags';

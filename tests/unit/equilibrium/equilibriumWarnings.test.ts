@@ -3,6 +3,7 @@ import {
   equilibriumWarnings,
   extrapolationEventsOfMethods,
   warningsAtDepth,
+  withWarningFlags,
   type EquilibriumInput,
   type Warning,
 } from '../../../src/engine/equilibrium';
@@ -210,11 +211,47 @@ describe('equilibriumWarnings: extrapolation', () => {
         { id: 'P', depthCm: 12, cf: 1, dosePerMuCGy: 1, flags: ['depth extrapolated'] },
         { id: 'Q', depthCm: 3, cf: 1, dosePerMuCGy: 1, flags: ['field clamped to table'] },
         { id: 'R', depthCm: 4, cf: 1, dosePerMuCGy: 1, flags: ['build-up'] },
+        {
+          id: 'S',
+          depthCm: 0.2,
+          cf: 1,
+          dosePerMuCGy: 1,
+          flags: ['extrapolated: depth 0.05 cm outside the table, clamped to 0.5 cm'],
+        },
       ],
     };
     expect(extrapolationEventsOfMethods([m])).toEqual([
       { methodId: 'batho', depthCm: 12, quantity: 'depth' },
       { methodId: 'batho', depthCm: 3, quantity: 'field' },
+      { methodId: 'batho', depthCm: 0.2, quantity: 'depth', requested: 0.05, clampedTo: 0.5 },
     ]);
+  });
+});
+
+describe('withWarningFlags', () => {
+  it('withWarningFlags adds the warnings concerning a method at each point, and none to others', () => {
+    const ws = equilibriumWarnings(
+      input({ beam: { energy: '18MV', ssdCm: 100, fieldXCm: 5, fieldYCm: 5 }, tpr2010: 0.78 }),
+    );
+    const result = (id: string): MethodResult => ({
+      id,
+      label: id,
+      variant: '',
+      methodClass: 'type A',
+      waterData: 'test',
+      curve: { depthCm: [], dosePerMuCGy: [], cf: [] },
+      points: [
+        { id: 'in-lung', depthCm: 12, cf: 1, dosePerMuCGy: 1, flags: [] },
+        { id: 'deep', depthCm: 28, cf: 1, dosePerMuCGy: 1, flags: [] },
+      ],
+    });
+    const [rtmr, mc, sup] = withWarningFlags(
+      [result('rtmr'), result('monte-carlo'), result('superposition')],
+      ws,
+    );
+    expect(rtmr?.points[0]?.flags).toContain('LED (severe)');
+    expect(rtmr?.points[1]?.flags).toEqual([]);
+    expect(mc?.points[0]?.flags).toEqual([]);
+    expect(sup?.points[0]?.flags).toContain('LED (severe; modelled approximately)');
   });
 });
