@@ -1,0 +1,69 @@
+// The depth-dose figure of a printed record as plain data: each method's dose per MU against
+// depth, thinned to at most `maxPoints` per curve, with the axis domains and tick values. The
+// PDF and HTML renderers only map it to their own coordinates.
+import type { CalcReport } from '../../compute/calculateCase';
+
+export interface ReportSeries {
+  label: string;
+  /** [depth cm, dose per MU cGy] pairs; gaps (null doses) split the curve into runs. */
+  runs: [number, number][][];
+}
+
+export interface ReportFigure {
+  title: string;
+  xLabel: string;
+  yLabel: string;
+  xDomain: [number, number];
+  yDomain: [number, number];
+  xTicks: number[];
+  yTicks: number[];
+  series: ReportSeries[];
+}
+
+/** Round tick values covering [lo, hi] with about `count` steps of 1, 2 or 5 × 10^k. */
+export function niceTicks(lo: number, hi: number, count: number): number[] {
+  if (!(hi > lo)) return [lo];
+  const raw = (hi - lo) / count;
+  const mag = 10 ** Math.floor(Math.log10(raw));
+  const step = ([1, 2, 5, 10].find((m) => m * mag >= raw) ?? 10) * mag;
+  const out: number[] = [];
+  for (let v = Math.ceil(lo / step - 1e-9) * step; v <= hi + step * 1e-9; v += step)
+    out.push(Number(v.toPrecision(12)));
+  return out;
+}
+
+export function depthDoseFigure(report: CalcReport, title: string, maxPoints = 160): ReportFigure {
+  const n = report.depthCm.length;
+  const stride = Math.max(1, Math.ceil(n / maxPoints));
+  let yMax = 0;
+  const series = report.methods.map((m): ReportSeries => {
+    const runs: [number, number][][] = [];
+    let run: [number, number][] = [];
+    for (let i = 0; i < n; i++) {
+      if (i % stride !== 0 && i !== n - 1) continue;
+      const y = m.curve.dosePerMuCGy[i];
+      const x = report.depthCm[i];
+      if (y === null || y === undefined || x === undefined || !Number.isFinite(y)) {
+        if (run.length > 0) runs.push(run);
+        run = [];
+        continue;
+      }
+      yMax = Math.max(yMax, y);
+      run.push([x, y]);
+    }
+    if (run.length > 0) runs.push(run);
+    return { label: m.label, runs };
+  });
+  const xMax = report.depthCm[n - 1] ?? 1;
+  const yTop = yMax > 0 ? yMax * 1.05 : 1;
+  return {
+    title,
+    xLabel: 'depth (cm)',
+    yLabel: 'dose per MU (cGy/MU)',
+    xDomain: [0, xMax],
+    yDomain: [0, yTop],
+    xTicks: niceTicks(0, xMax, 8),
+    yTicks: niceTicks(0, yTop, 5),
+    series,
+  };
+}

@@ -1,0 +1,72 @@
+// The point-check tables as text rows, shared by the printed record, the CLI and the page.
+import type { PlanCheck } from '../../engine/check/planCheck';
+
+const f = (v: number | null | undefined, digits: number): string =>
+  v === null || v === undefined || !Number.isFinite(v) ? '—' : v.toFixed(digits);
+
+const signed = (v: number | null | undefined): string =>
+  v === null || v === undefined || !Number.isFinite(v) ? '—' : `${v > 0 ? '+' : ''}${v.toFixed(2)}`;
+
+export const POINT_TABLE_HEADERS = [
+  'beam',
+  'point',
+  'depth cm',
+  'method',
+  'D/MU cGy',
+  'check MU',
+  'plan MU',
+  'ΔMU %',
+  'dose cGy',
+  'plan dose',
+  'Δdose %',
+  'tol %',
+  'verdict',
+];
+
+export function pointTableRows(check: PlanCheck): string[][] {
+  const label = new Map(check.methods.map((m) => [m.id, m.label]));
+  return check.beams.flatMap((b) =>
+    b.points.flatMap((p) =>
+      p.methods.map((m) => [
+        b.id,
+        p.pointId,
+        p.depthCm.toFixed(2),
+        label.get(m.methodId) ?? m.methodId,
+        f(m.dosePerMuCGy, 4),
+        f(m.mu, 1),
+        f(p.planningMu, 1),
+        signed(m.muDiffPercent),
+        f(m.doseCGy, 1),
+        f(p.planningDoseCGy, 1),
+        signed(m.doseDiffPercent),
+        String(p.tolerancePercent),
+        m.verdict,
+      ]),
+    ),
+  );
+}
+
+export const TOTAL_TABLE_HEADERS = [
+  'point',
+  'method',
+  'dose cGy',
+  'plan dose cGy',
+  'Δ %',
+  'tol %',
+  'verdict',
+];
+
+export function totalTableRows(check: PlanCheck): string[][] {
+  const label = new Map(check.methods.map((m) => [m.id, m.label]));
+  return check.totals.flatMap((t) =>
+    t.methods.map((m) => [
+      t.pointId,
+      label.get(m.methodId) ?? m.methodId,
+      f(m.doseCGy, 1),
+      f(t.planningDoseCGy, 1),
+      signed(m.diffPercent),
+      String(t.tolerancePercent),
+      t.missingInBeams.length > 0 ? `not in ${t.missingInBeams.join(', ')}` : m.verdict,
+    ]),
+  );
+}
