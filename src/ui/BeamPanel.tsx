@@ -1,0 +1,119 @@
+// Beam set-up: energy, SSD or SAD geometry, field size at 100 cm.
+import { BEAM_ENERGIES, BEAM_ENERGY_LABELS, isBeamEnergy } from '../engine/beam/energies';
+import { editCase, useAppStore } from '../state/store';
+import type { EditorCase } from '../state/editorCase';
+import { NumberField } from './NumberField';
+import { RULES } from './fieldRules';
+
+type Beam = EditorCase['beam'];
+
+function setBeam(patch: Partial<Beam>, key: string | null = null) {
+  editCase((c) => ({ ...c, beam: { ...c.beam, ...patch } }), key);
+}
+
+export function BeamPanel() {
+  const beam = useAppStore((s) => s.history.present.beam);
+  const setup = beam.setup;
+  return (
+    <section className="panel" aria-labelledby="beam-h">
+      <h2 id="beam-h">Beam</h2>
+      <div className="row">
+        <div className="field">
+          <label htmlFor="energy">Energy</label>
+          <select
+            id="energy"
+            value={beam.energy}
+            onChange={(e) => {
+              if (isBeamEnergy(e.target.value)) setBeam({ energy: e.target.value });
+            }}
+          >
+            {BEAM_ENERGIES.map((e) => (
+              <option key={e} value={e}>
+                {BEAM_ENERGY_LABELS[e]}
+              </option>
+            ))}
+          </select>
+        </div>
+        <fieldset className="field segmented">
+          <legend>Set-up</legend>
+          {(['SSD', 'SAD'] as const).map((kind) => (
+            <label key={kind}>
+              <input
+                type="radio"
+                name="setup"
+                value={kind}
+                checked={setup.kind === kind}
+                onChange={() =>
+                  setBeam({
+                    setup:
+                      kind === 'SSD'
+                        ? {
+                            kind: 'SSD',
+                            ssdCm:
+                              setup.kind === 'SAD' ? setup.sadCm - setup.isocentreDepthCm : 100,
+                          }
+                        : {
+                            kind: 'SAD',
+                            sadCm: 100,
+                            isocentreDepthCm: Math.min(10, setup.kind === 'SSD' ? 10 : 10),
+                          },
+                  })
+                }
+              />
+              {kind}
+            </label>
+          ))}
+        </fieldset>
+      </div>
+      <div className="row">
+        {setup.kind === 'SSD' ? (
+          <NumberField
+            draftKey="beam.setup.ssdCm"
+            label="SSD"
+            rule={RULES.distance('SSD')}
+            value={setup.ssdCm}
+            testId="ssd"
+            onCommit={(v) => setBeam({ setup: { kind: 'SSD', ssdCm: v } }, 'beam.setup.ssdCm')}
+          />
+        ) : (
+          <>
+            <NumberField
+              draftKey="beam.setup.sadCm"
+              label="SAD"
+              rule={RULES.distance('SAD')}
+              value={setup.sadCm}
+              onCommit={(v) => setBeam({ setup: { ...setup, sadCm: v } }, 'beam.setup.sadCm')}
+            />
+            <NumberField
+              draftKey="beam.setup.isocentreDepthCm"
+              label="Isocentre depth"
+              rule={RULES.isocentreDepth}
+              value={setup.isocentreDepthCm}
+              onCommit={(v) =>
+                setBeam({ setup: { ...setup, isocentreDepthCm: v } }, 'beam.setup.isocentreDepthCm')
+              }
+            />
+          </>
+        )}
+      </div>
+      <div className="row">
+        <NumberField
+          draftKey="beam.fieldXCm"
+          label="Field X at 100 cm"
+          rule={RULES.field('X')}
+          value={beam.fieldXCm}
+          testId="field-x"
+          onCommit={(v) => setBeam({ fieldXCm: v }, 'beam.fieldXCm')}
+        />
+        <NumberField
+          draftKey="beam.fieldYCm"
+          label="Field Y at 100 cm"
+          rule={RULES.field('Y')}
+          value={beam.fieldYCm}
+          testId="field-y"
+          onCommit={(v) => setBeam({ fieldYCm: v }, 'beam.fieldYCm')}
+        />
+      </div>
+    </section>
+  );
+}

@@ -1,0 +1,152 @@
+// The two comparison views: depth dose (with normalisation) and correction factors (with the
+// path's radiological depth). Both sit under the slab strip and share its depth axis.
+import type { CalcReport } from '../compute/calculateCase';
+import { displayWarnings, visibleWarnings } from '../plots/warnings';
+import { NORMALISATION_LABELS, type NormalisationMode } from '../plots/normalise';
+import { setNormalisation, useAppStore } from '../state/store';
+import { CurveChart } from './CurveChart';
+import { MethodLegend } from './MethodLegend';
+import { PointTable } from './PointTable';
+import { cfSeries, doseSeries, methodStyles } from './series';
+import { WarningList } from './WarningList';
+
+function interfacesOf(report: CalcReport): number[] {
+  return report.layers.slice(0, -1).map((l) => l.bottomCm);
+}
+
+function maxDepthOf(report: CalcReport): number {
+  return report.layers[report.layers.length - 1]?.bottomCm ?? 1;
+}
+
+function useWarningBands(report: CalcReport) {
+  const hidden = useAppStore((s) => s.hiddenWarningMethods);
+  const hiddenMethods = useAppStore((s) => s.hiddenMethods);
+  const all = displayWarnings(report.warnings);
+  const shown = visibleWarnings(all, [...hidden, ...hiddenMethods]);
+  return {
+    all,
+    bands: shown
+      .filter((w) => w.range)
+      .map((w) => ({
+        key: w.key,
+        fromCm: w.range!.fromCm,
+        toCm: w.range!.toCm,
+        severity: w.severity,
+        title: `${w.code} (${w.severity}): ${w.message}${w.numbers ? `\n${w.numbers}` : ''}`,
+      })),
+  };
+}
+
+export function DoseView({ report, width }: { report: CalcReport; width: number }) {
+  const hidden = useAppStore((s) => s.hiddenMethods);
+  const mode = useAppStore((s) => s.normalisation);
+  const { all, bands } = useWarningBands(report);
+  const s = doseSeries(report, hidden, mode);
+  return (
+    <div className="view">
+      {report.methods.length > 0 ? (
+        <div className="chart-controls">
+          <MethodLegend methods={report.methods} styles={methodStyles(report)} />
+          <div className="field">
+            <label htmlFor="norm">Normalisation</label>
+            <select
+              id="norm"
+              value={mode}
+              onChange={(e) => setNormalisation(e.target.value as NormalisationMode)}
+            >
+              {(Object.keys(NORMALISATION_LABELS) as NormalisationMode[]).map((k) => (
+                <option key={k} value={k}>
+                  {NORMALISATION_LABELS[k]}
+                </option>
+              ))}
+            </select>
+          </div>
+        </div>
+      ) : null}
+      {report.methods.length > 0 && !s.ok ? <p className="notice info">{s.reason}</p> : null}
+      {report.methods.length > 0 && s.ok ? (
+        <CurveChart
+          title="Central-axis depth dose, one curve per method"
+          testId="dose-chart"
+          depthCm={report.depthCm}
+          maxDepthCm={maxDepthOf(report)}
+          series={s.series}
+          axisLabel={s.axisLabel}
+          width={width}
+          height={320}
+          interfacesCm={interfacesOf(report)}
+          bands={bands}
+          points={report.points}
+          digits={mode === 'percentWaterDmax' ? 1 : 3}
+          yInclude={mode === 'relativeToWater' ? [1] : [0]}
+        />
+      ) : null}
+      <PointTable report={report} />
+      <WarningList warnings={all} />
+    </div>
+  );
+}
+
+export function CfView({ report, width }: { report: CalcReport; width: number }) {
+  const hidden = useAppStore((s) => s.hiddenMethods);
+  const { all, bands } = useWarningBands(report);
+  const interfaces = interfacesOf(report);
+  const maxDepth = maxDepthOf(report);
+  return (
+    <div className="view">
+      {report.methods.length > 0 ? (
+        <>
+          <div className="chart-controls">
+            <MethodLegend methods={report.methods} styles={methodStyles(report)} />
+          </div>
+          <CurveChart
+            title="Correction factor against depth, one curve per method"
+            testId="cf-chart"
+            depthCm={report.depthCm}
+            maxDepthCm={maxDepth}
+            series={cfSeries(report, hidden)}
+            axisLabel="Correction factor D_het / D_water"
+            width={width}
+            height={280}
+            interfacesCm={interfaces}
+            bands={bands}
+            points={report.points}
+            digits={3}
+            yInclude={[1]}
+          />
+          <PointTable report={report} />
+        </>
+      ) : null}
+      <CurveChart
+        title="Radiological (water-equivalent) depth against geometric depth"
+        testId="radiological-chart"
+        depthCm={report.depthCm}
+        maxDepthCm={maxDepth}
+        series={[
+          {
+            id: 'geometric',
+            label: 'Water (geometric depth)',
+            color: '#888888',
+            dash: '3 3',
+            values: report.depthCm,
+          },
+          {
+            id: 'radiological',
+            label: 'This path',
+            color: 'currentColor',
+            dash: '',
+            values: report.radiologicalDepthCm,
+          },
+        ]}
+        axisLabel="Radiological depth (cm)"
+        width={width}
+        height={220}
+        interfacesCm={interfaces}
+        points={report.points}
+        digits={2}
+        yInclude={[0]}
+      />
+      <WarningList warnings={all} />
+    </div>
+  );
+}

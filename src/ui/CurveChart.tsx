@@ -1,0 +1,213 @@
+// A chart of curves against depth (thin renderer over curveChartLayout): layer shading, warning
+// bands, ±1σ bands, one path per series, points of interest, and a crosshair readout that
+// lists every series' value at the hovered depth (pointer or arrow keys).
+import { useState, type KeyboardEvent, type PointerEvent } from 'react';
+import {
+  curveChartLayout,
+  nearestIndex,
+  type CurveSeries,
+  type DepthBand,
+} from '../plots/curveLayout';
+import { SIDE_MARGIN } from './frame';
+
+export interface CurveChartProps {
+  title: string;
+  depthCm: readonly number[];
+  maxDepthCm: number;
+  series: readonly CurveSeries[];
+  axisLabel: string;
+  width: number;
+  height: number;
+  interfacesCm: readonly number[];
+  bands?: readonly (DepthBand & { title: string })[];
+  points?: readonly { id: string; depthCm: number }[];
+  yInclude?: readonly number[];
+  digits: number;
+  testId?: string;
+}
+
+export function CurveChart(props: CurveChartProps) {
+  const frame = {
+    width: props.width,
+    height: props.height,
+    margin: { ...SIDE_MARGIN, top: 12, bottom: 40 },
+  };
+  const layout = curveChartLayout({
+    depthCm: props.depthCm,
+    maxDepthCm: props.maxDepthCm,
+    series: props.series,
+    frame,
+    interfacesCm: props.interfacesCm,
+    bands: props.bands,
+    yInclude: props.yInclude,
+  });
+  const [hover, setHover] = useState<number | null>(null);
+  const { plot } = layout;
+  const bottom = plot.top + plot.height;
+  const right = plot.left + plot.width;
+  const onMove = (e: PointerEvent<SVGRectElement>) => {
+    const box = e.currentTarget.ownerSVGElement?.getBoundingClientRect();
+    const z = layout.x.invert(e.clientX - (box?.left ?? 0));
+    setHover(nearestIndex(props.depthCm, z));
+  };
+  const onKey = (e: KeyboardEvent<SVGSVGElement>) => {
+    const n = props.depthCm.length;
+    if (n === 0) return;
+    const step = e.shiftKey ? 20 : 2;
+    if (e.key === 'ArrowRight') setHover((h) => Math.min(n - 1, (h ?? -step) + step));
+    else if (e.key === 'ArrowLeft') setHover((h) => Math.max(0, (h ?? n) - step));
+    else if (e.key === 'Escape') setHover(null);
+    else return;
+    e.preventDefault();
+  };
+  const hz = hover === null ? null : props.depthCm[hover];
+  const hx = hz === undefined || hz === null ? null : layout.x(hz);
+  const bandTitle = new Map((props.bands ?? []).map((b) => [b.key, b.title]));
+  return (
+    <figure className="chart" data-testid={props.testId}>
+      <figcaption className="sr-only">{props.title}</figcaption>
+      <svg
+        width={props.width}
+        height={props.height}
+        tabIndex={0}
+        role="img"
+        aria-label={`${props.title}. Arrow keys move the readout.`}
+        onKeyDown={onKey}
+        onBlur={() => setHover(null)}
+      >
+        {layout.bands.map((b) => (
+          <rect
+            key={b.key}
+            x={b.x}
+            y={plot.top}
+            width={b.width}
+            height={plot.height}
+            className={`warn-band sev-${b.severity}`}
+          >
+            <title>{bandTitle.get(b.key)}</title>
+          </rect>
+        ))}
+        {layout.yTicks.map((t) => (
+          <g key={`y${t.value}`}>
+            <line x1={plot.left} x2={right} y1={t.px} y2={t.px} className="grid" />
+            <text x={plot.left - 6} y={t.px + 4} textAnchor="end" className="tick-label">
+              {t.label}
+            </text>
+          </g>
+        ))}
+        {layout.xTicks.map((t) => (
+          <g key={`x${t.value}`}>
+            <line x1={t.px} x2={t.px} y1={bottom} y2={bottom + 5} className="axis-line" />
+            <text x={t.px} y={bottom + 18} textAnchor="middle" className="tick-label">
+              {t.label}
+            </text>
+          </g>
+        ))}
+        {layout.interfaces.map((x, i) => (
+          <line key={`i${i}`} x1={x} x2={x} y1={plot.top} y2={bottom} className="interface" />
+        ))}
+        <line x1={plot.left} x2={right} y1={bottom} y2={bottom} className="axis-line" />
+        <line x1={plot.left} x2={plot.left} y1={plot.top} y2={bottom} className="axis-line" />
+        <text
+          x={(plot.left + right) / 2}
+          y={props.height - 4}
+          textAnchor="middle"
+          className="axis-label"
+        >
+          Depth along the beam axis (cm)
+        </text>
+        <text
+          transform={`translate(14 ${plot.top + plot.height / 2}) rotate(-90)`}
+          textAnchor="middle"
+          className="axis-label"
+        >
+          {props.axisLabel}
+        </text>
+        {layout.sigmaBands.map((b) => (
+          <path key={`s${b.id}`} d={b.d} fill={b.color} className="sigma-band" />
+        ))}
+        {layout.curves.map((c) => (
+          <path
+            key={c.id}
+            d={c.d}
+            stroke={c.color}
+            strokeDasharray={c.dash || undefined}
+            className="curve"
+            data-method={c.id}
+          />
+        ))}
+        {(props.points ?? []).map((p) => {
+          const x = layout.x(Math.min(p.depthCm, props.maxDepthCm));
+          return (
+            <g key={p.id} className="poi">
+              <line x1={x} x2={x} y1={plot.top} y2={bottom} />
+              <text x={x + 3} y={plot.top + 10} className="poi-label">
+                {p.id}
+              </text>
+            </g>
+          );
+        })}
+        {hx !== null ? (
+          <line x1={hx} x2={hx} y1={plot.top} y2={bottom} className="crosshair" />
+        ) : null}
+        <rect
+          x={plot.left}
+          y={plot.top}
+          width={plot.width}
+          height={plot.height}
+          className="hit"
+          onPointerMove={onMove}
+          onPointerLeave={() => setHover(null)}
+        />
+        {layout.empty ? (
+          <text
+            x={(plot.left + right) / 2}
+            y={plot.top + plot.height / 2}
+            textAnchor="middle"
+            className="empty-note"
+          >
+            No values to plot
+          </text>
+        ) : null}
+      </svg>
+      {hover !== null && hx !== null && hz !== undefined && hz !== null ? (
+        <div
+          className="readout"
+          role="status"
+          style={
+            hx > plot.left + plot.width / 2 ? { right: props.width - hx + 10 } : { left: hx + 10 }
+          }
+        >
+          <div className="readout-depth">depth {hz.toFixed(2)} cm</div>
+          {props.series.map((s) => {
+            const v = s.values[hover];
+            const sd = s.sigma?.[hover];
+            return (
+              <div key={s.id} className="readout-row">
+                <svg width="22" height="8" aria-hidden="true">
+                  <line
+                    x1="0"
+                    x2="22"
+                    y1="4"
+                    y2="4"
+                    stroke={s.color}
+                    strokeDasharray={s.dash || undefined}
+                  />
+                </svg>
+                <span>{s.label}</span>
+                <span className="num">
+                  {v === null || v === undefined || !Number.isFinite(v)
+                    ? '—'
+                    : v.toFixed(props.digits)}
+                  {sd !== undefined && v !== null && v !== undefined
+                    ? ` ± ${sd.toFixed(props.digits)}`
+                    : ''}
+                </span>
+              </div>
+            );
+          })}
+        </div>
+      ) : null}
+    </figure>
+  );
+}

@@ -1,0 +1,55 @@
+// From a report to plottable series: visible methods, their styles and normalised values.
+import type { CalcReport } from '../compute/calculateCase';
+import type { CurveSeries } from '../plots/curveLayout';
+import { normaliseMethods, type NormalisationMode } from '../plots/normalise';
+import { seriesStyles } from '../plots/palette';
+
+const isNum = (v: number | null | undefined): v is number =>
+  typeof v === 'number' && Number.isFinite(v);
+
+export function methodStyles(report: CalcReport) {
+  return seriesStyles(report.methods.map((m) => m.id));
+}
+
+export function doseSeries(
+  report: CalcReport,
+  hidden: readonly string[],
+  mode: NormalisationMode,
+): { ok: true; axisLabel: string; series: CurveSeries[] } | { ok: false; reason: string } {
+  const styles = methodStyles(report);
+  const shown = report.methods.filter((m) => !hidden.includes(m.id));
+  const n = normaliseMethods(shown, mode);
+  if (!n.ok) return n;
+  return {
+    ok: true,
+    axisLabel: n.axisLabel,
+    series: n.series.map((s, i) => {
+      const m = shown[i]!;
+      const st = styles.get(m.id)!;
+      return {
+        id: m.id,
+        label: m.label,
+        color: st.color,
+        dash: st.dash,
+        values: s.values,
+        sigma: s.sigma,
+      };
+    }),
+  };
+}
+
+export function cfSeries(report: CalcReport, hidden: readonly string[]): CurveSeries[] {
+  const styles = methodStyles(report);
+  return report.methods
+    .filter((m) => !hidden.includes(m.id))
+    .map((m) => {
+      const st = styles.get(m.id)!;
+      return {
+        id: m.id,
+        label: m.label,
+        color: st.color,
+        dash: st.dash,
+        values: m.curve.cf.map((v) => (isNum(v) ? v : null)),
+      };
+    });
+}
