@@ -12,6 +12,9 @@ import type { MethodResult } from '../engine/methodResult';
 import type { LaminaCase } from '../io/caseSchema';
 import type { Warning } from '../engine/equilibrium';
 import { caseWarnings } from './caseWarnings';
+import type { WaterData } from '../engine/beam/waterData';
+import type { CorrectionOptions } from '../engine/corrections/correctionTypes';
+import { isTypeAMethodId, typeAForCase } from './typeAForCase';
 
 export const CALC_FORMAT = 'lamina.calc';
 export const CALC_VERSION = 1;
@@ -21,6 +24,10 @@ export interface CalcOptions {
   methods?: readonly string[];
   /** Depth step of the curves (cm). */
   depthStepCm?: number;
+  /** Water data for the type-A methods; the case's inline table when absent. */
+  waterData?: WaterData;
+  /** Type-A variants (Batho TAR/TMR, ETAR ρ̃ or weights, dose to medium). */
+  typeA?: CorrectionOptions;
 }
 
 export interface CalcReport {
@@ -83,7 +90,13 @@ export function calculateCase(c: LaminaCase, options: CalcOptions = {}): CalcRep
   const step = options.depthStepCm ?? 0.05;
   const grid = depthGridCm(phantom.totalThicknessCm, step);
   const requested = options.methods ?? [];
-  const unavailable = requested.map((id) => ({ id, reason: 'method not implemented yet' }));
+  const typeA = typeAForCase(c, phantom, grid, options.methods, options.waterData, options.typeA);
+  const unavailable = [
+    ...typeA.unavailable,
+    ...requested
+      .filter((id) => !isTypeAMethodId(id))
+      .map((id) => ({ id, reason: 'method not implemented yet' })),
+  ];
   return {
     format: CALC_FORMAT,
     version: CALC_VERSION,
@@ -120,9 +133,9 @@ export function calculateCase(c: LaminaCase, options: CalcOptions = {}): CalcRep
     })),
     depthCm: grid,
     radiologicalDepthCm: grid.map((d) => radiologicalDepthCm(phantom, d)),
-    methods: [],
+    methods: [...typeA.methods],
     unavailable,
-    warnings: caseWarnings(c, phantom, []),
+    warnings: caseWarnings(c, phantom, typeA.methods, typeA.waterData),
     cautions: [...CAUTIONS],
   };
 }

@@ -3,6 +3,7 @@
 import { z } from 'zod';
 import { BEAM_ENERGIES } from '../engine/beam/energies';
 import { MATERIAL_IDS } from '../engine/materials/materialLibrary';
+import { buildMeasuredWaterData } from '../engine/beam/measuredTable';
 
 export const CASE_FORMAT = 'lamina.case';
 export const CASE_VERSION = 1;
@@ -96,6 +97,54 @@ export const pointSchema = z.strictObject({
     .optional(),
 });
 
+/**
+ * Measured water data carried inline as raw CSV text, so a case file stays self-contained:
+ * a TMR or PDD matrix (PDD with its SSD), optional scatter factors, d_max and reference dose rate.
+ * The tables themselves are checked with the measured-table reader (row/column in each message).
+ */
+export const waterDataSchema = z
+  .strictObject({
+    kind: z.enum(['tmr', 'pdd'], { error: 'water data kind must be "tmr" or "pdd"' }),
+    fileName: z
+      .string({ error: 'file name must be text' })
+      .min(1, 'file name must not be empty')
+      .max(200),
+    csv: z
+      .string({ error: 'csv must be text' })
+      .min(1, 'csv must not be empty')
+      .max(500_000, 'csv must be at most 500 000 characters'),
+    ssdCm: distance('table SSD').optional(),
+    dMaxCm: finite('d_max')
+      .refine((v) => v > 0 && v < 10, 'd_max must lie in (0, 10) cm')
+      .optional(),
+    scatterFileName: z.string().min(1).max(200).optional(),
+    scatterCsv: z
+      .string()
+      .max(100_000, 'scatter csv must be at most 100 000 characters')
+      .optional(),
+    referenceDosePerMuCGy: finite('reference dose rate')
+      .refine((v) => v > 0 && v <= 10, 'reference dose rate must lie in (0, 10] cGy/MU')
+      .optional(),
+  })
+  .superRefine((w, ctx) => {
+    if (w.kind === 'pdd' && w.ssdCm === undefined) {
+      ctx.addIssue({ code: 'custom', path: ['ssdCm'], message: 'a PDD table needs its SSD (cm)' });
+      return;
+    }
+    const built = buildMeasuredWaterData(w);
+    if (!built.ok)
+      for (const message of built.problems)
+        ctx.addIssue({
+          code: 'custom',
+          path: [
+            message.startsWith(`${w.scatterFileName ?? 'scatter factors'}: `)
+              ? 'scatterCsv'
+              : 'csv',
+          ],
+          message,
+        });
+  });
+
 export const caseSchema = z
   .strictObject({
     format: z.literal(CASE_FORMAT, { error: `format must be "${CASE_FORMAT}"` }),
@@ -110,6 +159,8 @@ export const caseSchema = z
     points: z
       .array(pointSchema, { error: 'points must be a list' })
       .max(LIMITS.maxPoints, `points: at most ${LIMITS.maxPoints} points`),
+    /** Measured water data (optional; type-A methods need water data). */
+    waterData: waterDataSchema.optional(),
   })
   .superRefine((c, ctx) => {
     const total = c.layers.reduce((s, l) => s + l.thicknessCm, 0);
@@ -158,3 +209,4 @@ export type LaminaCase = z.infer<typeof caseSchema>;
 export type CaseLayer = z.infer<typeof layerSchema>;
 export type CasePoint = z.infer<typeof pointSchema>;
 export type CaseBeam = z.infer<typeof beamSchema>;
+export type CaseWaterData = z.infer<typeof waterDataSchema>;

@@ -21,7 +21,7 @@ const GL_W = [
 
 /** ∫_0^T G(t) dt for T > 0, with t = T·u² so the integrand is smooth in u. */
 function integralFromPoint(tCm: number, radiusCm: number, lambdaCm: number): number {
-  if (tCm <= 0) return 0;
+  if (tCm < 1e-9) return 0; // the integrand is O(t ln t): nothing below a nanometre
   const g = (u: number) => {
     const t = tCm * u * u;
     const e = expIntegralE1(Math.sqrt(radiusCm * radiusCm + t * t) / lambdaCm);

@@ -1,0 +1,65 @@
+// The type-A block of a case calculation: which water data to use (given by the caller, else the
+// case's inline table), which type-A methods were asked for, and their results or the reason they
+// could not be computed.
+import { ssdCmOf } from '../engine/beam/geometry';
+import { buildMeasuredWaterData } from '../engine/beam/measuredTable';
+import type { WaterData } from '../engine/beam/waterData';
+import type { CorrectionOptions } from '../engine/corrections/correctionTypes';
+import { TYPE_A_METHOD_IDS, TYPE_A_METHODS } from '../engine/corrections/typeAMethods';
+import { typeAMethodResults } from '../engine/corrections/typeAResults';
+import type { MethodResult } from '../engine/methodResult';
+import type { SlabPhantom } from '../engine/phantom/slabPhantom';
+import type { LaminaCase } from '../io/caseSchema';
+
+export const NEEDS_WATER_DATA = 'needs water data: load a measured TMR/PDD table';
+
+export interface TypeAOutcome {
+  methods: MethodResult[];
+  unavailable: { id: string; reason: string }[];
+  /** The water data used, when there was any. */
+  waterData?: WaterData;
+}
+
+export function isTypeAMethodId(id: string): boolean {
+  return TYPE_A_METHOD_IDS.includes(id);
+}
+
+/** The caller's water data, else the case's inline table (already validated with the case). */
+export function waterDataForCase(c: LaminaCase, given?: WaterData): WaterData | undefined {
+  if (given) return given;
+  if (!c.waterData) return undefined;
+  const built = buildMeasuredWaterData(c.waterData);
+  return built.ok ? built.waterData : undefined;
+}
+
+/**
+ * Type-A results for a case on the report's depth grid. `requested` = method ids asked for
+ * (undefined: all type-A methods).
+ */
+export function typeAForCase(
+  c: LaminaCase,
+  phantom: SlabPhantom,
+  depthCm: readonly number[],
+  requested: readonly string[] | undefined,
+  givenWaterData?: WaterData,
+  options: CorrectionOptions = {},
+): TypeAOutcome {
+  const ids = requested ? requested.filter(isTypeAMethodId) : TYPE_A_METHOD_IDS;
+  const waterData = waterDataForCase(c, givenWaterData);
+  if (!waterData)
+    return { methods: [], unavailable: ids.map((id) => ({ id, reason: NEEDS_WATER_DATA })) };
+  const methods = TYPE_A_METHODS.filter((m) => ids.includes(m.id));
+  const geometry = {
+    phantom,
+    ssdCm: ssdCmOf(c.beam.setup),
+    fieldXCm: c.beam.fieldXCm,
+    fieldYCm: c.beam.fieldYCm,
+    depthCm,
+    points: c.points,
+  };
+  return {
+    methods: typeAMethodResults(methods, geometry, waterData, options),
+    unavailable: [],
+    waterData,
+  };
+}

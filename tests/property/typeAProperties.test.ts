@@ -1,0 +1,160 @@
+// Invariants of the type-A corrections over generated slab phantoms (fast-check), with the
+// analytic 6 MV-like fixture water data (invented) unless stated.
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { bathoMethod } from '../../src/engine/corrections/batho';
+import { bathoModifiedMethod } from '../../src/engine/corrections/bathoModified';
+import type { TypeAMethod } from '../../src/engine/corrections/correctionTypes';
+import { etarMethod } from '../../src/engine/corrections/etar';
+import { rtmrMethod } from '../../src/engine/corrections/rtmr';
+import { TYPE_A_METHODS } from '../../src/engine/corrections/typeAMethods';
+import { makeExponentialWaterData, makeF6WaterData } from '../fixtures/f6WaterData';
+import { slabs } from '../fixtures/slabPhantoms';
+
+const wd = makeF6WaterData();
+const RUNS = { numRuns: 150 };
+const options = { ssdCm: 100 };
+
+const cfOf = (m: TypeAMethod, p: ReturnType<typeof slabs>, d: number, s: number, o = options) =>
+  m.correct(p, d, s, wd, o).cf;
+
+const side = fc.double({ min: 3, max: 30, noNaN: true });
+const layers = fc.array(
+  fc.tuple(
+    fc.double({ min: 0.05, max: 2.5, noNaN: true }),
+    fc.double({ min: 0.2, max: 8, noNaN: true }),
+  ),
+  { minLength: 1, maxLength: 5 },
+);
+
+describe('type-A invariants', () => {
+  it('every method gives CF = 1 in homogeneous water (to round-off of the summed radiological depth)', () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.double({ min: 0.2, max: 10, noNaN: true }), { minLength: 1, maxLength: 4 }),
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        side,
+        (thicknesses, u, s) => {
+          const p = slabs(thicknesses.map((t) => [1, t] as const));
+          const d = u * p.totalThicknessCm;
+          for (const m of TYPE_A_METHODS) {
+            const cf = cfOf(m, p, d, s) as number;
+            // d′ is a sum over layers, so it may differ from d in the last bit: 1e-12
+            expect(Math.abs(cf - 1)).toBeLessThanOrEqual(1e-12);
+          }
+        },
+      ),
+      RUNS,
+    );
+  });
+
+  const beyondSlab = (rho: fc.Arbitrary<number>) =>
+    fc.record({
+      above: fc.double({ min: 0.5, max: 6, noNaN: true }),
+      rho,
+      thickness: fc.double({ min: 1, max: 10, noNaN: true }),
+      beyond: fc.double({ min: 1.5, max: 10, noNaN: true }),
+      s: side,
+    });
+
+  it('a lung slab upstream gives CF > 1 beyond it (≥ d_max past the slab) for every method', () => {
+    fc.assert(
+      fc.property(beyondSlab(fc.double({ min: 0.1, max: 0.9, noNaN: true })), (g) => {
+        const p = slabs([
+          [1, g.above],
+          [g.rho, g.thickness],
+          [1, 30],
+        ]);
+        const d = g.above + g.thickness + g.beyond;
+        for (const m of TYPE_A_METHODS.filter((x) => x.id !== 'water'))
+          expect(cfOf(m, p, d, g.s), m.id).toBeGreaterThan(1);
+      }),
+      RUNS,
+    );
+  });
+
+  it('a bone slab upstream gives CF < 1 beyond it (≥ d_max past the slab) for every method', () => {
+    fc.assert(
+      fc.property(beyondSlab(fc.double({ min: 1.1, max: 2, noNaN: true })), (g) => {
+        const p = slabs([
+          [1, g.above],
+          [g.rho, g.thickness],
+          [1, 30],
+        ]);
+        const d = g.above + g.thickness + g.beyond;
+        for (const m of TYPE_A_METHODS.filter((x) => x.id !== 'water'))
+          expect(cfOf(m, p, d, g.s), m.id).toBeLessThan(1);
+      }),
+      RUNS,
+    );
+  });
+
+  it('batho(...) = rtmr(...) = batho-modified(...) for an exponential TMR with the point in water', () => {
+    const exp = makeExponentialWaterData(0.05);
+    fc.assert(
+      fc.property(
+        layers,
+        fc.double({ min: 0.01, max: 10, noNaN: true }),
+        side,
+        (spec, beyond, s) => {
+          const p = slabs([...spec, [1, 10]]);
+          const d = p.totalThicknessCm - 10 + beyond;
+          const r = rtmrMethod.correct(p, d, s, exp, {}).cf as number;
+          // identity up to round-off in products of up to 6 powers
+          expect(
+            Math.abs((bathoMethod.correct(p, d, s, exp, {}).cf as number) / r - 1),
+          ).toBeLessThan(1e-12);
+          expect(
+            Math.abs((bathoModifiedMethod.correct(p, d, s, exp, {}).cf as number) / r - 1),
+          ).toBeLessThan(1e-12);
+        },
+      ),
+      RUNS,
+    );
+  });
+
+  it('batho-modified(...) is continuous across every interface (±1e-6 cm)', () => {
+    fc.assert(
+      fc.property(layers, side, (spec, s) => {
+        const p = slabs([...spec, [1, 5]]);
+        for (let k = 1; k < p.layers.length; k++) {
+          const z = p.boundariesCm[k] as number;
+          const above = cfOf(bathoModifiedMethod, p, z - 1e-6, s) as number;
+          const below = cfOf(bathoModifiedMethod, p, z + 1e-6, s) as number;
+          // slope of CF is below ~1 per cm, so 2e-6 cm moves it by < 1e-5; a jump would be ≥ 1e-3
+          expect(Math.abs(above - below)).toBeLessThan(1e-5);
+        }
+      }),
+      RUNS,
+    );
+  });
+
+  it('etar(...) with ρ̃ = 1 equals rtmr(...)', () => {
+    fc.assert(
+      fc.property(layers, fc.double({ min: 0, max: 1, noNaN: true }), side, (spec, u, s) => {
+        const p = slabs(spec);
+        const d = u * p.totalThicknessCm;
+        const e = cfOf(etarMethod, p, d, s, {
+          ssdCm: 100,
+          etarRhoTilde: 1,
+        } as typeof options) as number;
+        expect(Math.abs(e / (cfOf(rtmrMethod, p, d, s) as number) - 1)).toBeLessThan(1e-14);
+      }),
+      RUNS,
+    );
+  });
+
+  it('every method returns a finite positive CF for any valid phantom, point and field', () => {
+    fc.assert(
+      fc.property(layers, fc.double({ min: 0, max: 1, noNaN: true }), side, (spec, u, s) => {
+        const p = slabs(spec);
+        const d = u * p.totalThicknessCm;
+        for (const m of TYPE_A_METHODS) {
+          const cf = cfOf(m, p, d, s);
+          expect(cf !== null && Number.isFinite(cf) && cf > 0, `${m.id}: ${cf}`).toBe(true);
+        }
+      }),
+      RUNS,
+    );
+  });
+});
