@@ -1,0 +1,120 @@
+// From energy per history in depth bins to dose per unit fluence, with the inverse-square fall of
+// a divergent beam's fluence, optional dose to water, and the depth of maximum dose.
+import { FIELD_DEFINITION_DISTANCE_CM } from '../beam/geometry';
+import {
+  makeSlabPhantom,
+  cumulativeMassThicknessGPerCm2,
+  layerIndexAtDepth,
+  type SlabLayer,
+} from '../phantom/slabPhantom';
+import { collisionStoppingPowerMeVCm2PerG } from '../materials/electronStopping';
+import type { McScenario, ScoringGrid } from './scenario';
+import type { BinStatistics } from './batchStatistics';
+
+/** 1 MeV/g in gray (J/kg): 1.602176634e-13 J / 1e-3 kg (SI 2019 exact elementary charge). */
+export const GRAY_PER_MEV_PER_G = 1.602176634e-10;
+
+export interface McDepthDose {
+  /** Bin edges (cm), length nDepth + 1. */
+  edgesCm: number[];
+  /** Dose per unit fluence at 100 cm from the source, Gy·cm² per photon, per bin. */
+  dosePerFluenceGyCm2: number[];
+  sigmaGyCm2: number[];
+}
+
+/**
+ * Dose per fluence Φ₁₀₀ (photons/cm² at 100 cm): D = E/(m/A) × (100/(SSD + z))², with E the
+ * energy per history in the bin's aperture column and m/A its mass per area (exact across
+ * interfaces). With `toWater`, dose to medium is converted by the water/medium collision
+ * stopping-power ratio at `electronEnergyMeV` (Siebers et al., PMB 45, 983 (2000), with one
+ * representative electron energy instead of the full spectrum).
+ */
+export function depthDoseFromStatistics(
+  scenario: McScenario,
+  grid: ScoringGrid,
+  stats: BinStatistics,
+  toWater?: { electronEnergyMeV: number },
+): McDepthDose {
+  const phantom = makeSlabPhantom(scenario.layers);
+  const dz = grid.depthBinCm;
+  const edges: number[] = [];
+  const dose: number[] = [];
+  const sigma: number[] = [];
+  for (let i = 0; i <= grid.nDepth; i++) edges.push(i * dz);
+  for (let i = 0; i < grid.nDepth; i++) {
+    const top = i * dz;
+    const bottom = Math.min(phantom.totalThicknessCm, (i + 1) * dz);
+    const massPerArea =
+      cumulativeMassThicknessGPerCm2(phantom, bottom) -
+      cumulativeMassThicknessGPerCm2(phantom, top);
+    const zc = (i + 0.5) * dz;
+    const isq = (FIELD_DEFINITION_DISTANCE_CM / (scenario.ssdCm + zc)) ** 2;
+    let factor = (GRAY_PER_MEV_PER_G * isq) / massPerArea;
+    if (toWater) {
+      const layer = phantom.layers[layerIndexAtDepth(phantom, zc)] as SlabLayer;
+      const id = layer.materialId;
+      const t = toWater.electronEnergyMeV;
+      factor *=
+        collisionStoppingPowerMeVCm2PerG('water', t) / collisionStoppingPowerMeVCm2PerG(id, t);
+    }
+    dose.push((stats.mean[i] as number) * factor);
+    sigma.push((stats.sigma[i] as number) * factor);
+  }
+  return { edgesCm: edges, dosePerFluenceGyCm2: dose, sigmaGyCm2: sigma };
+}
+
+/**
+ * Depth and value of the maximum: least-squares parabola through the five bins around the
+ * largest three-bin running mean (less biased by noise than the single largest bin).
+ */
+export function depthOfMaximum(d: McDepthDose): { depthCm: number; value: number; sigma: number } {
+  const v = d.dosePerFluenceGyCm2;
+  const n = v.length;
+  let best = 0;
+  let bestValue = -Infinity;
+  for (let i = 0; i < n; i++) {
+    const a = v[Math.max(0, i - 1)] as number;
+    const b = v[i] as number;
+    const c = v[Math.min(n - 1, i + 1)] as number;
+    if (a + b + c > bestValue) {
+      bestValue = a + b + c;
+      best = i;
+    }
+  }
+  const centre = (i: number): number =>
+    ((d.edgesCm[i] as number) + (d.edgesCm[i + 1] as number)) / 2;
+  const lo = Math.max(0, Math.min(best - 2, n - 5));
+  const hi = Math.min(n - 1, lo + 4);
+  const sigma = d.sigmaGyCm2[best] as number;
+  if (hi - lo < 4) return { depthCm: centre(best), value: v[best] as number, sigma };
+  // Fit y = a + b t + c t² with t = x − x_best.
+  let s0 = 0,
+    s1 = 0,
+    s2 = 0,
+    s3 = 0,
+    s4 = 0,
+    y0 = 0,
+    y1 = 0,
+    y2 = 0;
+  const xb = centre(best);
+  for (let i = lo; i <= hi; i++) {
+    const t = centre(i) - xb;
+    const y = v[i] as number;
+    s0 += 1;
+    s1 += t;
+    s2 += t * t;
+    s3 += t * t * t;
+    s4 += t * t * t * t;
+    y0 += y;
+    y1 += t * y;
+    y2 += t * t * y;
+  }
+  const det = s0 * (s2 * s4 - s3 * s3) - s1 * (s1 * s4 - s3 * s2) + s2 * (s1 * s3 - s2 * s2);
+  const a = (y0 * (s2 * s4 - s3 * s3) - s1 * (y1 * s4 - s3 * y2) + s2 * (y1 * s3 - s2 * y2)) / det;
+  const b = (s0 * (y1 * s4 - y2 * s3) - y0 * (s1 * s4 - s3 * s2) + s2 * (s1 * y2 - y1 * s2)) / det;
+  const c = (s0 * (s2 * y2 - s3 * y1) - s1 * (s1 * y2 - y1 * s2) + y0 * (s1 * s3 - s2 * s2)) / det;
+  const t0 = c < 0 ? -b / (2 * c) : 0;
+  const halfSpan = (centre(hi) - centre(lo)) / 2;
+  if (c >= 0 || Math.abs(t0) > halfSpan) return { depthCm: xb, value: v[best] as number, sigma };
+  return { depthCm: xb + t0, value: a + b * t0 + c * t0 * t0, sigma };
+}

@@ -1,0 +1,194 @@
+// Turning merged batch tallies into the report: dose per fluence per bin for each scenario, dose
+// per MU by the calibration run, CF against the water run, the MethodResult on the report's
+// depth grid, and the x–z dose plane for the page.
+import { makeSlabPhantom } from '../phantom/slabPhantom';
+import { FIELD_DEFINITION_DISTANCE_CM } from '../beam/geometry';
+import { cumulativeMassThicknessGPerCm2 } from '../phantom/slabPhantom';
+import type { MethodResult } from '../methodResult';
+import type { BatchAccumulator } from './batchStatistics';
+import {
+  depthDoseFromStatistics,
+  depthOfMaximum,
+  GRAY_PER_MEV_PER_G,
+  type McDepthDose,
+} from './depthDose';
+import { sampleBinsAtDepths } from './gridSampling';
+import type { McPlan } from './monteCarloPlan';
+import { scoringGrid, type ScoringGrid } from './scenario';
+import { makeSpectrumSampler } from './spectrumSampler';
+import type { EnergyTally } from './transport';
+
+/** Planar dose (x across the field, z down the central axis), dose per MU. */
+export interface McPlane {
+  xCm: number[];
+  /** Depth bin centres (cm). */
+  depthCm: number[];
+  /** Row per depth: dose per MU (cGy/MU) at each x. */
+  dosePerMuCGy: number[][];
+}
+
+export interface McResult {
+  method: MethodResult;
+  histories: number;
+  batchesDone: number;
+  batches: number;
+  seed: number;
+  /** Per-bin dose per fluence of the case, the water run and the calibration run. */
+  depthDose: { case: McDepthDose; water: McDepthDose; reference: McDepthDose };
+  referenceDMaxCm: number;
+  /** cGy/MU per (Gy·cm² per photon): multiply a dose per fluence by this to get dose per MU. */
+  muPerFluence: number;
+  plane: McPlane;
+  energyBalance: EnergyTally;
+}
+
+/** Representative electron kinetic energy for the water/medium stopping-power ratio (MeV). */
+function representativeElectronEnergyMeV(plan: McPlan): number {
+  // About a third of the mean photon energy: mean Compton transfer (0.44–0.53 of E at 1–2 MeV,
+  // Klein–Nishina) averaged over the slowing-down spectrum; the ratio varies slowly with energy.
+  const s = plan.scenarios[plan.roles.case];
+  return s ? makeSpectrumSampler(s.energy).meanEnergyMeV / 3 : 0.5;
+}
+
+export function finalizeMonteCarlo(
+  plan: McPlan,
+  accumulators: readonly BatchAccumulator[],
+  depthGridCm: readonly number[],
+): McResult {
+  const opts = plan.options;
+  const toWater = opts.doseToWater
+    ? { electronEnergyMeV: representativeElectronEnergyMeV(plan) }
+    : undefined;
+  const dd = (i: number): McDepthDose => {
+    const s = plan.scenarios[i]!;
+    return depthDoseFromStatistics(
+      s,
+      scoringGrid(s, plan.binning),
+      accumulators[i]!.caxStatistics(),
+      toWater,
+    );
+  };
+  const caseDd = dd(plan.roles.case);
+  const waterDd = dd(plan.roles.water);
+  const refDd = dd(plan.roles.reference);
+  const max = depthOfMaximum(refDd);
+  const refRate = opts.referenceDosePerMuCGy ?? 1;
+  const sc = opts.collimatorScatterFactor ?? 1;
+  const muPerFluence = (refRate * sc) / max.value;
+  const relRef = max.sigma / max.value;
+  const caseScenario = plan.scenarios[plan.roles.case]!;
+  const phantom = makeSlabPhantom(caseScenario.layers);
+  const binCm = (caseDd.edgesCm[1] as number) - (caseDd.edgesCm[0] as number);
+
+  const perMu = caseDd.dosePerFluenceGyCm2.map((d) => d * muPerFluence);
+  const perMuSigma = caseDd.dosePerFluenceGyCm2.map((d, i) => {
+    const rel = (caseDd.sigmaGyCm2[i] as number) / d;
+    return d * muPerFluence * Math.sqrt(rel * rel + relRef * relRef);
+  });
+  const cf = caseDd.dosePerFluenceGyCm2.map(
+    (d, i) => d / (waterDd.dosePerFluenceGyCm2[i] as number),
+  );
+  const cfSigma = cf.map((r, i) => {
+    const a = (caseDd.sigmaGyCm2[i] as number) / (caseDd.dosePerFluenceGyCm2[i] as number);
+    const b = (waterDd.sigmaGyCm2[i] as number) / (waterDd.dosePerFluenceGyCm2[i] as number);
+    return r * Math.sqrt(a * a + b * b);
+  });
+  const onGrid = sampleBinsAtDepths(phantom, binCm, perMu, perMuSigma, depthGridCm);
+  const cfGrid = sampleBinsAtDepths(phantom, binCm, cf, cfSigma, depthGridCm);
+  const pointDepths = plan.points.map((p) => p.depthCm);
+  const atPoints = sampleBinsAtDepths(phantom, binCm, perMu, perMuSigma, pointDepths);
+  const cfPoints = sampleBinsAtDepths(phantom, binCm, cf, cfSigma, pointDepths);
+  const acc = accumulators[plan.roles.case]!;
+  const histories = acc.histories;
+  const spectrum = makeSpectrumSampler(caseScenario.energy);
+  const finite = (v: number): number | null => (Number.isFinite(v) ? v : null);
+  const method: MethodResult = {
+    id: 'monte-carlo',
+    label: 'Monte Carlo',
+    variant: [
+      `${binCm.toFixed(3)} cm depth bins`,
+      'central axis from laterally integrated pencil deposits over the field projected to each depth (reciprocity), inverse-square fluence',
+      opts.doseToWater ? 'dose to water (stopping-power ratio)' : 'dose to medium',
+      'CF against a Monte Carlo water run with the same set-up',
+      `dose/MU calibrated by a water run 10 × 10 cm², SSD 100, d_max ${max.depthCm.toFixed(2)} cm = ${refRate} cGy/MU`,
+      `S_c = ${sc}`,
+      `${histories} histories in ${acc.completed} of ${plan.batches} batches, seed ${plan.seed}`,
+      spectrum.approximate ? 'spectrum approximate (derived stand-in)' : 'published spectrum',
+    ].join('; '),
+    methodClass: 'type C',
+    waterData: 'not used (Monte Carlo from spectra and cross sections)',
+    curve: {
+      depthCm: [...depthGridCm],
+      dosePerMuCGy: onGrid.value.map(finite),
+      cf: cfGrid.value.map(finite),
+      sigmaDosePerMuCGy: onGrid.sigma.map((s) => (Number.isFinite(s) ? s : 0)),
+    },
+    points: plan.points.map((p, i) => {
+      const dose = atPoints.value[i] as number;
+      const sigma = atPoints.sigma[i] as number;
+      const flags: string[] = [];
+      if (!(sigma / dose <= 0.02)) flags.push('MC 1σ > 2 %');
+      return {
+        id: p.id,
+        depthCm: p.depthCm,
+        cf: finite(cfPoints.value[i] as number),
+        dosePerMuCGy: finite(dose),
+        sigmaDosePerMuCGy: Number.isFinite(sigma) ? sigma : 0,
+        flags,
+      };
+    }),
+  };
+  const grid = scoringGrid(caseScenario, plan.binning);
+  return {
+    method,
+    histories,
+    batchesDone: acc.completed,
+    batches: plan.batches,
+    seed: plan.seed,
+    depthDose: { case: caseDd, water: waterDd, reference: refDd },
+    referenceDMaxCm: max.depthCm,
+    muPerFluence,
+    plane: planeOf(grid, acc.lateralMean(), phantom, caseScenario.ssdCm, muPerFluence),
+    energyBalance: acc.energy(),
+  };
+}
+
+/** Box filter of the lateral deposit histogram by the field width at each depth (see depthDoseScorer). */
+function planeOf(
+  grid: ScoringGrid,
+  lateral: Float64Array,
+  phantom: ReturnType<typeof makeSlabPhantom>,
+  ssdCm: number,
+  muPerFluence: number,
+): McPlane {
+  const step = 0.5;
+  const half = (grid.halfXCm[grid.nDepth - 1] as number) + 3;
+  const xs: number[] = [];
+  for (let x = -Math.floor(half / step) * step; x <= half + 1e-9; x += step)
+    xs.push(Math.round(x * 1e6) / 1e6);
+  const rows: number[][] = [];
+  const depths: number[] = [];
+  const dz = grid.depthBinCm;
+  for (let iz = 0; iz < grid.nDepth; iz++) {
+    const zc = (iz + 0.5) * dz;
+    depths.push(zc);
+    const mass =
+      cumulativeMassThicknessGPerCm2(phantom, Math.min(phantom.totalThicknessCm, (iz + 1) * dz)) -
+      cumulativeMassThicknessGPerCm2(phantom, iz * dz);
+    const factor =
+      ((GRAY_PER_MEV_PER_G * (FIELD_DEFINITION_DISTANCE_CM / (ssdCm + zc)) ** 2) / mass) *
+      muPerFluence;
+    const hx = grid.halfXCm[iz] as number;
+    const row: number[] = [];
+    for (const x of xs) {
+      let e = 0;
+      for (let ix = 0; ix < grid.nLateral; ix++) {
+        const xc = grid.lateralStartCm + (ix + 0.5) * grid.lateralBinCm;
+        if (Math.abs(x - xc) < hx) e += lateral[iz * grid.nLateral + ix] ?? 0;
+      }
+      row.push(e * factor);
+    }
+    rows.push(row);
+  }
+  return { xCm: xs, depthCm: depths, dosePerMuCGy: rows };
+}
