@@ -4,10 +4,12 @@ import { calculateCase } from '../compute/calculateCase';
 import { describeProblems, parseCaseText } from '../io/caseFile';
 import { parseArgs } from './args';
 import { formatReport } from './formatReport';
+import { WATER_TABLE_USAGE, waterTableFromFlags } from './waterTableArgs';
 
 const USAGE = `Usage: npm run calc -- <case.json> [--json] [--methods id,id,...]
   --json          print one JSON document (format "lamina.calc")
-  --methods LIST  comma-separated method ids to compute (default: all available)`;
+  --methods LIST  comma-separated method ids to compute (default: all available)
+${WATER_TABLE_USAGE}`;
 
 function main(argv: string[]): number {
   let args;
@@ -42,7 +44,15 @@ function main(argv: string[]): number {
           .map((s) => s.trim())
           .filter(Boolean)
       : undefined;
-  const report = calculateCase(parsed.value, methods ? { methods } : {});
+  const table = waterTableFromFlags(args.flags);
+  if (table && !table.ok) {
+    console.error(`invalid water data\n${table.problems.join('\n')}`);
+    return 2;
+  }
+  const report = calculateCase(parsed.value, {
+    ...(methods ? { methods } : {}),
+    ...(table ? { waterData: table.waterData } : {}),
+  });
   if (args.flags.get('json') === true) process.stdout.write(`${JSON.stringify(report, null, 2)}\n`);
   else process.stdout.write(`${formatReport(report)}\n`);
   return 0;

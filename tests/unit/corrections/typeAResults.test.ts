@@ -1,0 +1,117 @@
+// Type-A methods inside a whole case calculation: curves on the report's grid, points, flags,
+// the inline case water data and the "needs water data" path.
+import { readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import { calculateCase } from '../../../src/compute/calculateCase';
+import { NEEDS_WATER_DATA } from '../../../src/compute/typeAForCase';
+import { dosePerMuFactors } from '../../../src/engine/check/dosePerMu';
+import { parseCaseText, validateCase } from '../../../src/io/caseFile';
+import type { LaminaCase } from '../../../src/io/caseSchema';
+import { makeF6WaterData } from '../../fixtures/f6WaterData';
+import { expectRelClose } from '../../helpers/expectClose';
+
+function demoCase(): LaminaCase {
+  const r = parseCaseText(readFileSync('public/cases/lung-slab-6mv.json', 'utf8'));
+  if (!r.ok) throw new Error('demo case invalid');
+  return r.value;
+}
+
+const TMR_CSV = readFileSync('public/tables/demo-6mv-tmr.csv', 'utf8');
+
+describe('calculateCase with type-A methods', () => {
+  it('without water data every requested type-A method is unavailable with the reason', () => {
+    const r = calculateCase(demoCase(), { methods: ['batho', 'etar', 'monte-carlo'] });
+    expect(r.methods).toEqual([]);
+    expect(r.unavailable.filter((u) => u.id !== 'monte-carlo')).toEqual([
+      { id: 'batho', reason: NEEDS_WATER_DATA },
+      { id: 'etar', reason: NEEDS_WATER_DATA },
+    ]);
+  });
+
+  it('with water data gives each method a finite curve on the report grid and its points', () => {
+    const r = calculateCase(demoCase(), { waterData: makeF6WaterData() });
+    expect(r.methods.map((m) => m.id)).toEqual([
+      'water',
+      'rtmr',
+      'epl-pdd',
+      'batho',
+      'batho-modified',
+      'etar',
+    ]);
+    for (const m of r.methods) {
+      expect(m.curve.depthCm).toEqual(r.depthCm);
+      for (const v of [...m.curve.cf, ...m.curve.dosePerMuCGy])
+        expect(v === null || (Number.isFinite(v) && v > 0)).toBe(true);
+      expect(m.points.map((p) => p.id)).toEqual(['P1', 'in-lung']);
+      expect(m.variant.length).toBeGreaterThan(0);
+      expect(m.waterData).toBe('analytic test fixture F6 (invented)');
+    }
+  });
+
+  it('a point’s dose per MU is the TG-71 chain times the method’s CF', () => {
+    const c = demoCase();
+    const r = calculateCase(c, { waterData: makeF6WaterData(), methods: ['rtmr'] });
+    const p = r.methods[0]?.points[0];
+    const f = dosePerMuFactors({
+      waterData: makeF6WaterData(),
+      ssdCm: 100,
+      depthCm: 15,
+      fieldXCm: 10,
+      fieldYCm: 10,
+      cf: p?.cf as number,
+    });
+    expectRelClose(p?.dosePerMuCGy as number, f.dosePerMuCGy, 1e-14); // same arithmetic
+    // water method: CF exactly 1, dose = reference × S_c × S_p × TMR × inverse square
+    const w = calculateCase(c, { waterData: makeF6WaterData(), methods: ['water'] }).methods[0];
+    expect(w?.points[0]?.cf).toBe(1);
+  });
+
+  it('uses the case’s inline water data and validates it with row/column messages', () => {
+    const raw = JSON.parse(readFileSync('public/cases/lung-slab-6mv.json', 'utf8')) as Record<
+      string,
+      unknown
+    >;
+    const ok = validateCase({
+      ...raw,
+      waterData: { kind: 'tmr', fileName: 't.csv', csv: TMR_CSV, dMaxCm: 1.5 },
+    });
+    expect(ok.ok).toBe(true);
+    if (!ok.ok) return;
+    const r = calculateCase(ok.value, { methods: ['batho-modified'] });
+    expect(r.methods[0]?.waterData).toMatch(/^measured table: t\.csv \(sha-256 [0-9a-f]{12}\)/);
+    const bad = validateCase({
+      ...raw,
+      waterData: { kind: 'tmr', fileName: 't.csv', csv: TMR_CSV.replace('0.7845', 'n/a') },
+    });
+    expect(bad.ok).toBe(false);
+    if (bad.ok) return;
+    expect(bad.problems[0]?.path).toBe('waterData.csv');
+    expect(bad.problems[0]?.message).toMatch(
+      /^t\.csv: row \d+, column \d+ \([A-Z]+\): "n\/a" is not a number/,
+    );
+    const pddNoSsd = validateCase({
+      ...raw,
+      waterData: { kind: 'pdd', fileName: 'p.csv', csv: 'x' },
+    });
+    expect(!pddNoSsd.ok && pddNoSsd.problems[0]?.path).toBe('waterData.ssdCm');
+  });
+
+  it('an SAD set-up uses SSD = SAD − isocentre depth in the factor chain', () => {
+    const c: LaminaCase = {
+      ...demoCase(),
+      beam: { ...demoCase().beam, setup: { kind: 'SAD', sadCm: 100, isocentreDepthCm: 10 } },
+    };
+    const r = calculateCase(c, { waterData: makeF6WaterData(), methods: ['water'] });
+    const p = r.methods[0]?.points.find((q) => q.id === 'P1');
+    const f = dosePerMuFactors({
+      waterData: makeF6WaterData(),
+      ssdCm: 90,
+      depthCm: 15,
+      fieldXCm: 10,
+      fieldYCm: 10,
+      cf: 1,
+    });
+    expectRelClose(p?.dosePerMuCGy as number, f.dosePerMuCGy, 1e-14); // same arithmetic
+    expectRelClose(f.inverseSquare, (101.5 / 105) ** 2, 1e-14);
+  });
+});
