@@ -5,6 +5,21 @@ import { validateCase } from '../io/caseFile';
 import { makeSlabPhantom, radiologicalDepthCurve } from '../engine/phantom/slabPhantom';
 import { depthGridCm } from './calculateCase';
 import type { LayerSpec } from '../engine/phantom/slabPhantom';
+import {
+  buildMeasuredWaterData,
+  type MeasuredTableInput,
+  type MeasuredTableSummary,
+} from '../engine/beam/measuredTable';
+import type { CorrectionOptions } from '../engine/corrections/correctionTypes';
+
+/**
+ * Calculation options that cross the worker boundary: plain data only. The water table travels as
+ * CSV text and is rebuilt into WaterData inside the worker.
+ */
+export interface WorkerCalcOptions extends Omit<CalcOptions, 'waterData' | 'typeA'> {
+  waterTable?: MeasuredTableInput;
+  typeA?: Pick<CorrectionOptions, 'bathoTable' | 'etarRhoTilde' | 'etarScatterLengthCm'>;
+}
 
 export interface RadiologicalCurve {
   depthCm: number[];
@@ -24,13 +39,28 @@ export const computeApi = {
   /** Validate and calculate a case; invalid input comes back as problems, never as a throw. */
   calculate(
     raw: unknown,
-    options: CalcOptions = {},
+    options: WorkerCalcOptions = {},
   ):
     | { ok: true; report: CalcReport }
     | { ok: false; problems: { path: string; message: string }[] } {
     const v = validateCase(raw);
     if (!v.ok) return v;
-    return { ok: true, report: calculateCase(v.value, options) };
+    const { waterTable, ...rest } = options;
+    if (!waterTable) return { ok: true, report: calculateCase(v.value, rest) };
+    const table = buildMeasuredWaterData(waterTable);
+    if (!table.ok)
+      return {
+        ok: false,
+        problems: table.problems.map((message) => ({ path: 'waterTable', message })),
+      };
+    return { ok: true, report: calculateCase(v.value, { ...rest, waterData: table.waterData }) };
+  },
+  /** Validate a measured TMR/PDD table (and scatter factors): problems, or a summary with plot data. */
+  parseWaterTable(
+    input: MeasuredTableInput,
+  ): { ok: true; summary: MeasuredTableSummary } | { ok: false; problems: string[] } {
+    const r = buildMeasuredWaterData(input);
+    return r.ok ? { ok: true, summary: r.summary } : r;
   },
 };
 
