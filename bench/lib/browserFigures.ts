@@ -1,0 +1,168 @@
+// Figures measured in Debian's Chromium (launched with the flags of playwright.config.ts):
+// cold page load to the first render of the heading, and edit-to-paint latency of keyboard
+// nudges of a layer interface in the slab editor (when the page has one).
+import { chromium, type Browser, type Page } from '@playwright/test';
+import playwrightConfig from '../../playwright.config';
+import { errorRow, notMeasuredRow, type BenchRow } from './row';
+
+const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
+
+export async function launchChromium(): Promise<Browser> {
+  const args = playwrightConfig.use?.launchOptions?.args ?? [];
+  return chromium.launch({ executablePath: CHROMIUM, args, headless: true });
+}
+
+type Probe = Window & {
+  __laminaHeadingMs?: number;
+  __laminaLatencies?: number[];
+};
+
+/**
+ * Runs before any page script: notes the time (ms since navigation start) of the first frame
+ * painted after an <h1> with text appears (requestAnimationFrame, then a message-channel task,
+ * which runs after that frame's paint). Plain JavaScript text: functions compiled by tsx carry
+ * name helpers that do not exist inside the page.
+ */
+const HEADING_PROBE = `(() => {
+  const obs = new MutationObserver(() => {
+    const h = document.querySelector('h1');
+    if (!h || !h.textContent) return;
+    obs.disconnect();
+    requestAnimationFrame(() => {
+      const ch = new MessageChannel();
+      ch.port1.onmessage = () => { window.__laminaHeadingMs = performance.now(); };
+      ch.port2.postMessage(0);
+    });
+  });
+  obs.observe(document, { childList: true, subtree: true, characterData: true });
+})();`;
+
+async function coldLoadOnce(
+  browser: Browser,
+  url: string,
+): Promise<{ heading: number; fcp: number }> {
+  const context = await browser.newContext(); // fresh profile: empty cache
+  try {
+    const page = await context.newPage();
+    await page.addInitScript({ content: HEADING_PROBE });
+    await page.goto(url, { waitUntil: 'commit' });
+    await page.waitForFunction(() => (window as Probe).__laminaHeadingMs !== undefined, null, {
+      timeout: 30_000,
+    });
+    return await page.evaluate(() => {
+      const fcp = performance.getEntriesByName('first-contentful-paint')[0];
+      return {
+        heading: (window as Probe).__laminaHeadingMs as number,
+        fcp: fcp ? fcp.startTime : NaN,
+      };
+    });
+  } finally {
+    await context.close();
+  }
+}
+
+export async function coldLoadRows(browser: Browser, url: string, runs = 5): Promise<BenchRow[]> {
+  const heading: number[] = [];
+  const fcp: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const r = await coldLoadOnce(browser, url);
+    heading.push(r.heading);
+    if (Number.isFinite(r.fcp)) fcp.push(r.fcp);
+  }
+  const rows: BenchRow[] = [
+    {
+      group: 'page (Chromium)',
+      name: 'cold load: navigation → heading painted',
+      unit: 'ms',
+      samples: heading,
+      note: `fresh browser context each run, vite preview, ${runs} runs`,
+    },
+  ];
+  if (fcp.length > 0)
+    rows.push({
+      group: 'page (Chromium)',
+      name: 'cold load: first contentful paint',
+      unit: 'ms',
+      samples: fcp,
+    });
+  return rows;
+}
+
+const HANDLE = '[data-testid="boundary-1"]';
+const EDIT_GROUP = 'page (Chromium)';
+const EDIT_NAME = 'edit-to-paint, arrow-key nudge of a layer interface';
+
+/**
+ * Listens for keydown; after the slab editor's DOM changes, notes the time to the next paint.
+ * (No named inner functions: see HEADING_PROBE.)
+ */
+function installLatencyProbe(handleSelector: string): void {
+  const w = window as Probe;
+  w.__laminaLatencies = [];
+  const target = document.querySelector(handleSelector)?.closest('svg') ?? document.body;
+  let pending: number | null = null;
+  const obs = new MutationObserver(() => {
+    if (pending === null) return;
+    const t0 = pending;
+    pending = null;
+    requestAnimationFrame(() => {
+      const ch = new MessageChannel();
+      ch.port1.onmessage = () => w.__laminaLatencies?.push(performance.now() - t0);
+      ch.port2.postMessage(0);
+    });
+  });
+  obs.observe(target, { attributes: true, childList: true, subtree: true, characterData: true });
+  document.addEventListener('keydown', (e) => (pending = e.timeStamp), { capture: true });
+}
+
+async function nudge(page: Page, key: 'ArrowRight' | 'ArrowLeft', expected: number) {
+  await page.keyboard.press(key);
+  await page.waitForFunction(
+    (n) => ((window as Probe).__laminaLatencies?.length ?? 0) >= n,
+    expected,
+    { timeout: 5_000 },
+  );
+}
+
+export async function editToPaintRows(
+  browser: Browser,
+  url: string,
+  nudges = 60,
+): Promise<BenchRow[]> {
+  const context = await browser.newContext();
+  try {
+    const page = await context.newPage();
+    await page.goto(url);
+    await page.waitForSelector('h1', { timeout: 30_000 });
+    const handle = await page.waitForSelector(HANDLE, { timeout: 10_000 }).catch(() => null);
+    if (!handle)
+      return [
+        notMeasuredRow(
+          EDIT_GROUP,
+          EDIT_NAME,
+          `the page exposes no slab-editor interface handle (${HANDLE})`,
+        ),
+      ];
+    await page.evaluate(installLatencyProbe, HANDLE);
+    await handle.focus();
+    const before = await handle.getAttribute('aria-valuenow');
+    const warmUp = 4; // even, like the nudges: the boundary ends where it started
+    let count = 0;
+    for (let i = 0; i < warmUp + nudges; i++) {
+      // Alternate directions so the geometry stays put.
+      await nudge(page, i % 2 === 0 ? 'ArrowRight' : 'ArrowLeft', ++count);
+    }
+    const after = await page.getAttribute(HANDLE, 'aria-valuenow');
+    const all = await page.evaluate(() => (window as Probe).__laminaLatencies ?? []);
+    const samples = all.slice(warmUp);
+    const note = `${samples.length} nudges (±0.1 cm) after ${warmUp} warm-up; boundary ${before} → ${after} cm`;
+    return [
+      { group: EDIT_GROUP, name: `${EDIT_NAME} (p50)`, unit: 'ms', samples, note },
+      { group: EDIT_GROUP, name: `${EDIT_NAME} (p95)`, unit: 'ms', samples, stat: 'p95' },
+    ];
+  } catch (e) {
+    return [errorRow(EDIT_GROUP, EDIT_NAME, e)];
+  } finally {
+    await context.close();
+  }
+}
