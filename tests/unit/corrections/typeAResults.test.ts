@@ -4,6 +4,7 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { calculateCase } from '../../../src/compute/calculateCase';
 import { NEEDS_WATER_DATA } from '../../../src/compute/typeAForCase';
+import { TYPE_A_METHOD_IDS } from '../../../src/engine/corrections/typeAMethods';
 import { dosePerMuFactors } from '../../../src/engine/check/dosePerMu';
 import { parseCaseText, validateCase } from '../../../src/io/caseFile';
 import type { LaminaCase } from '../../../src/io/caseSchema';
@@ -29,7 +30,10 @@ describe('calculateCase with type-A methods', () => {
   });
 
   it('with water data gives each method a finite curve on the report grid and its points', () => {
-    const r = calculateCase(demoCase(), { waterData: makeF6WaterData() });
+    const r = calculateCase(demoCase(), {
+      waterData: makeF6WaterData(),
+      methods: TYPE_A_METHOD_IDS,
+    });
     expect(r.methods.map((m) => m.id)).toEqual([
       'water',
       'rtmr',
