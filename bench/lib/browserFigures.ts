@@ -49,13 +49,19 @@ async function coldLoadOnce(
     await page.waitForFunction(() => (window as Probe).__laminaHeadingMs !== undefined, null, {
       timeout: 30_000,
     });
-    return await page.evaluate(() => {
-      const fcp = performance.getEntriesByName('first-contentful-paint')[0];
-      return {
-        heading: (window as Probe).__laminaHeadingMs as number,
-        fcp: fcp ? fcp.startTime : NaN,
-      };
-    });
+    const heading = await page.evaluate(() => (window as Probe).__laminaHeadingMs as number);
+    // The paint entry can be queued after the heading's frame: wait for it (at most 2 s).
+    const fcp = await page.evaluate(
+      () =>
+        new Promise<number>((resolve) => {
+          new PerformanceObserver((list) => {
+            const e = list.getEntriesByName('first-contentful-paint')[0];
+            if (e) resolve(e.startTime);
+          }).observe({ type: 'paint', buffered: true });
+          setTimeout(() => resolve(NaN), 2000);
+        }),
+    );
+    return { heading, fcp };
   } finally {
     await context.close();
   }

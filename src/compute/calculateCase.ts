@@ -13,8 +13,7 @@ import type { LaminaCase } from '../io/caseSchema';
 import type { Warning } from '../engine/equilibrium';
 import { caseWarnings } from './caseWarnings';
 import type { WaterData } from '../engine/beam/waterData';
-import type { CorrectionOptions } from '../engine/corrections/correctionTypes';
-import { isTypeAMethodId, typeAForCase } from './typeAForCase';
+import { isTypeAMethodId, typeAForCase, type TypeAVariants } from './typeAForCase';
 
 export const CALC_FORMAT = 'lamina.calc';
 export const CALC_VERSION = 1;
@@ -27,7 +26,7 @@ export interface CalcOptions {
   /** Water data for the type-A methods; the case's inline table when absent. */
   waterData?: WaterData;
   /** Type-A variants (Batho TAR/TMR, ETAR ρ̃ or weights, dose to medium). */
-  typeA?: CorrectionOptions;
+  typeA?: TypeAVariants;
 }
 
 export interface CalcReport {
