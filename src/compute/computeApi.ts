@@ -10,7 +10,7 @@ import {
   type MeasuredTableInput,
   type MeasuredTableSummary,
 } from '../engine/beam/measuredTable';
-import type { CorrectionOptions } from '../engine/corrections/correctionTypes';
+import type { TypeAVariants } from './typeAForCase';
 
 /**
  * Calculation options that cross the worker boundary: plain data only. The water table travels as
@@ -18,7 +18,10 @@ import type { CorrectionOptions } from '../engine/corrections/correctionTypes';
  */
 export interface WorkerCalcOptions extends Omit<CalcOptions, 'waterData' | 'typeA'> {
   waterTable?: MeasuredTableInput;
-  typeA?: Pick<CorrectionOptions, 'bathoTable' | 'etarRhoTilde' | 'etarScatterLengthCm'>;
+  typeA?: Pick<
+    TypeAVariants,
+    'bathoTable' | 'etarRhoTilde' | 'etarScatterLengthCm' | 'doseToMedium'
+  >;
 }
 
 export interface RadiologicalCurve {

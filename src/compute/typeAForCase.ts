@@ -5,6 +5,7 @@ import { ssdCmOf } from '../engine/beam/geometry';
 import { buildMeasuredWaterData } from '../engine/beam/measuredTable';
 import type { WaterData } from '../engine/beam/waterData';
 import type { CorrectionOptions } from '../engine/corrections/correctionTypes';
+import { muEnRatioOfLayerForBeam } from '../engine/corrections/doseToMedium';
 import { TYPE_A_METHOD_IDS, TYPE_A_METHODS } from '../engine/corrections/typeAMethods';
 import { typeAMethodResults } from '../engine/corrections/typeAResults';
 import type { MethodResult } from '../engine/methodResult';
@@ -12,6 +13,9 @@ import type { SlabPhantom } from '../engine/phantom/slabPhantom';
 import type { LaminaCase } from '../io/caseSchema';
 
 export const NEEDS_WATER_DATA = 'needs water data: load a measured TMR/PDD table';
+
+/** Type-A variant choices; `doseToMedium` applies the spectrum-weighted (μ_en/ρ) ratio in the Batho forms. */
+export type TypeAVariants = CorrectionOptions & { doseToMedium?: boolean };
 
 export interface TypeAOutcome {
   methods: MethodResult[];
@@ -42,8 +46,11 @@ export function typeAForCase(
   depthCm: readonly number[],
   requested: readonly string[] | undefined,
   givenWaterData?: WaterData,
-  options: CorrectionOptions = {},
+  variants: TypeAVariants = {},
 ): TypeAOutcome {
+  const { doseToMedium, ...options } = variants;
+  if (doseToMedium && !options.muEnRatioOfLayer)
+    options.muEnRatioOfLayer = muEnRatioOfLayerForBeam(c.beam.energy);
   const ids = requested ? requested.filter(isTypeAMethodId) : TYPE_A_METHOD_IDS;
   const waterData = waterDataForCase(c, givenWaterData);
   if (!waterData)
