@@ -255,3 +255,52 @@ describe('withWarningFlags', () => {
     expect(sup?.points[0]?.flags).toContain('LED (severe; modelled approximately)');
   });
 });
+
+describe('equilibriumWarnings: severity thresholds', () => {
+  it('equilibriumWarnings grades LED by the half-width / lateral-range ratio (caution between 0.5 and 0.8)', () => {
+    // Derived: 10 MV typical TPR20,10 0.73 → r_LCPE 1.672 g/cm², 6.69 cm in ρ 0.25; a 7 × 7 field
+    // has half-width 3.5·(100 + d)/100 = 3.675–3.85 cm in the lung → ratio 0.55–0.58.
+    const ws = equilibriumWarnings({
+      phantom: lungPhantom(),
+      beam: { energy: '10MV', ssdCm: 100, fieldXCm: 7, fieldYCm: 7 },
+    });
+    const led = ws.filter((w) => w.code === 'LED');
+    expect(led).toHaveLength(1);
+    expect(led[0]?.severity).toBe('caution');
+    expect(led[0]?.values.ratio).toBeGreaterThan(0.5);
+    expect(led[0]?.values.ratio).toBeLessThan(0.8);
+  });
+
+  it('equilibriumWarnings uses the narrower side of a rectangular field for LED', () => {
+    const wide = equilibriumWarnings(
+      input({ beam: { energy: '6MV', ssdCm: 100, fieldXCm: 20, fieldYCm: 20 } }),
+    );
+    const slit = equilibriumWarnings(
+      input({ beam: { energy: '6MV', ssdCm: 100, fieldXCm: 20, fieldYCm: 3 } }),
+    );
+    expect(wide.filter((w) => w.code === 'LED')).toHaveLength(0);
+    const led = slit.find((w) => w.code === 'LED');
+    // Derived: half-width 1.5·1.05 = 1.575 cm against 1.31/0.25 = 5.25 cm → ratio 0.30.
+    expect(led?.severity).toBe('severe');
+  });
+
+  it('equilibriumWarnings makes a lung interface severe at high energy and caution at 6 MV', () => {
+    const high = equilibriumWarnings(input({ tpr2010: 0.78, dMaxCm: 3.2 }));
+    const low = equilibriumWarnings(input());
+    expect(byId(high, 'INTERFACE-DOWNSTREAM@layer3')?.severity).toBe('severe');
+    expect(byId(low, 'INTERFACE-DOWNSTREAM@layer3')?.severity).toBe('caution');
+  });
+
+  it('equilibriumWarnings raises HIGH-ENERGY-SMALL-FIELD-LUNG from TPR20,10 0.75 and up to an 8 cm equivalent square', () => {
+    const codes = (tpr: number, side: number) =>
+      equilibriumWarnings(
+        input({
+          tpr2010: tpr,
+          beam: { energy: '15MV', ssdCm: 100, fieldXCm: side, fieldYCm: side },
+        }),
+      ).map((w) => w.code);
+    expect(codes(0.76, 8)).toContain('HIGH-ENERGY-SMALL-FIELD-LUNG');
+    expect(codes(0.74, 8)).not.toContain('HIGH-ENERGY-SMALL-FIELD-LUNG');
+    expect(codes(0.76, 8.5)).not.toContain('HIGH-ENERGY-SMALL-FIELD-LUNG');
+  });
+});
