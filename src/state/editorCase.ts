@@ -5,6 +5,7 @@ import {
   CASE_VERSION,
   type CaseLayer,
   type CasePoint,
+  type CaseWaterData,
   type LaminaCase,
 } from '../io/caseSchema';
 
@@ -17,6 +18,8 @@ export interface EditorCase {
   beam: LaminaCase['beam'];
   layers: EditorLayer[];
   points: EditorPoint[];
+  /** Measured water data carried in the case (type-A methods need it). */
+  waterData?: CaseWaterData | undefined;
 }
 
 let counter = 0;
@@ -33,6 +36,7 @@ export function fromCaseFile(c: LaminaCase): EditorCase {
     beam: structuredClone(c.beam),
     layers: c.layers.map((l) => ({ ...l, key: newKey('L') })),
     points: c.points.map((p) => ({ ...p, key: newKey('P') })),
+    waterData: c.waterData,
   };
 }
 
@@ -46,6 +50,7 @@ export function toCaseFile(e: EditorCase): LaminaCase {
     points: e.points.map(({ key: _key, ...p }) => p),
   };
   if (e.notes !== undefined) c.notes = e.notes;
+  if (e.waterData !== undefined) c.waterData = structuredClone(e.waterData);
   return c;
 }
 

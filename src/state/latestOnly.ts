@@ -1,6 +1,10 @@
 // Latest-wins scheduling for background calculations: at most one request in flight and at most
-// one waiting; a newer request replaces the waiting one, and a result that is no longer the
-// newest is dropped. A newer edit therefore always wins, and edits never pile up in a queue.
+// one waiting; a newer request replaces the waiting one (edits never pile up in a queue). A
+// result is shown only if it is newer than the one on screen, so a newer edit always wins; while
+// a drag goes on, each finished calculation still repaints (marked `superseded` when a newer
+// request is already waiting).
+
+export type LatestResult<R> = { ok: true; value: R } | { ok: false; error: unknown };
 
 export interface LatestOnly<I> {
   /** Ask for a calculation of `input`; returns its request id. */
@@ -13,11 +17,11 @@ export interface LatestOnly<I> {
 
 export function makeLatestOnly<I, R>(
   run: (input: I) => Promise<R>,
-  deliver: (result: { ok: true; value: R } | { ok: false; error: unknown }, id: number) => void,
+  deliver: (result: LatestResult<R>, id: number, superseded: boolean) => void,
   onStart?: (id: number) => void,
 ): LatestOnly<I> {
   let nextId = 0;
-  let newest = 0;
+  let shown = 0;
   let inFlight = false;
   let waiting: { id: number; input: I } | null = null;
 
@@ -29,26 +33,27 @@ export function makeLatestOnly<I, R>(
       (error: unknown) => finish(id, { ok: false, error }),
     );
   };
-  const finish = (id: number, result: { ok: true; value: R } | { ok: false; error: unknown }) => {
+  const finish = (id: number, result: LatestResult<R>) => {
     inFlight = false;
-    if (id === newest) deliver(result, id);
     const w = waiting;
     waiting = null;
+    if (id > shown) {
+      shown = id;
+      deliver(result, id, w !== null);
+    }
     if (w) start(w.id, w.input);
   };
   return {
     request(input: I) {
       nextId += 1;
-      newest = nextId;
       if (inFlight) waiting = { id: nextId, input };
       else start(nextId, input);
       return nextId;
     },
-    latestId: () => newest,
+    latestId: () => nextId,
     cancel() {
       waiting = null;
-      nextId += 1;
-      newest = nextId;
+      shown = nextId;
     },
   };
 }

@@ -139,6 +139,7 @@ export function CfView({ report, width }: { report: CalcReport; width: number })
           },
         ]}
         axisLabel="Radiological depth (cm)"
+        legend
         width={width}
         height={220}
         interfacesCm={interfaces}

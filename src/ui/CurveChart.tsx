@@ -24,6 +24,10 @@ export interface CurveChartProps {
   yInclude?: readonly number[];
   digits: number;
   testId?: string;
+  /** Depth-axis title; the beam-axis depth when absent. */
+  xLabel?: string;
+  /** Draw a legend under the chart (for charts without the method legend). */
+  legend?: boolean;
 }
 
 export function CurveChart(props: CurveChartProps) {
@@ -114,7 +118,7 @@ export function CurveChart(props: CurveChartProps) {
           textAnchor="middle"
           className="axis-label"
         >
-          Depth along the beam axis (cm)
+          {props.xLabel ?? 'Depth along the beam axis (cm)'}
         </text>
         <text
           transform={`translate(14 ${plot.top + plot.height / 2}) rotate(-90)`}
@@ -170,6 +174,26 @@ export function CurveChart(props: CurveChartProps) {
           </text>
         ) : null}
       </svg>
+      {props.legend ? (
+        <div className="chart-legend">
+          {props.series.map((s) => (
+            <span key={s.id}>
+              <svg width="26" height="10" aria-hidden="true">
+                <line
+                  x1="0"
+                  x2="26"
+                  y1="5"
+                  y2="5"
+                  stroke={s.color}
+                  strokeWidth="2"
+                  strokeDasharray={s.dash || undefined}
+                />
+              </svg>
+              {s.label}
+            </span>
+          ))}
+        </div>
+      ) : null}
       {hover !== null && hx !== null && hz !== undefined && hz !== null ? (
         <div
           className="readout"

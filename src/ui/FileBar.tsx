@@ -52,7 +52,10 @@ export function FileBar() {
           data-testid="preset"
           onChange={(e) => {
             const p = presetById(e.target.value);
-            if (p) replaceCase(p.make());
+            if (!p) return;
+            // The water data belong to the machine, not the phantom: keep them.
+            const waterData = useAppStore.getState().history.present.waterData;
+            replaceCase(waterData ? { ...p.make(), waterData } : p.make());
           }}
         >
           <option value="">New from preset…</option>

@@ -1,6 +1,8 @@
 // What the calculation could and could not do, in plain words: case problems with their field
 // paths, methods that are unavailable and why, or that no method has produced results.
-import { useAppStore } from '../state/store';
+import { NEEDS_WATER_DATA } from '../compute/typeAForCase';
+import { setTab, useAppStore } from '../state/store';
+import { loadDemoTables } from './demoTables';
 
 export function ResultStatus() {
   const calc = useAppStore((s) => s.calc);
@@ -31,6 +33,21 @@ export function ResultStatus() {
           {r.unavailable.length === 0
             ? 'No dose method is available in this build yet; the geometry and radiological depths below are computed.'
             : null}
+        </div>
+      ) : null}
+      {r && r.unavailable.some((u) => u.reason === NEEDS_WATER_DATA) ? (
+        <div className="notice info" data-testid="needs-water">
+          <strong>The type-A methods need water data</strong> (TMR or PDD with scatter factors).{' '}
+          <button type="button" onClick={() => setTab('water')}>
+            Load a measured table…
+          </button>{' '}
+          <button
+            type="button"
+            onClick={() => void loadDemoTables()}
+            data-testid="quick-demo-water"
+          >
+            Use the demo 6 MV table (invented data)
+          </button>
         </div>
       ) : null}
       {r && r.unavailable.length > 0 ? (

@@ -1,13 +1,287 @@
-// Water data: which water data the type-A methods read. Measured tables are loaded here once
-// the compute API can parse them; until then the panel says so.
-export function WaterDataPanel({ width: _width }: { width: number }) {
+// Water data: load a measured TMR or PDD table and scatter factors (file or paste), see them
+// checked (problems name row and column) and plotted, and choose what the case's type-A methods
+// read. The modelled beam is offered once an engine provides it.
+import { useAppStore, editCase } from '../state/store';
+import {
+  checkWaterDraft,
+  draftOf,
+  EMPTY_WATER_DRAFT,
+  patchWaterDraft,
+  useWaterDraft,
+  type WaterDraft,
+} from '../state/waterDraft';
+import { seriesStyles } from '../plots/palette';
+import { CurveChart } from './CurveChart';
+import { loadDemoTables } from './demoTables';
+
+function FileInput({
+  label,
+  onText,
+  testId,
+}: {
+  label: string;
+  onText: (name: string, text: string) => void;
+  testId: string;
+}) {
   return (
-    <section className="mount-empty" data-testid="water-panel">
-      <h2>Water data</h2>
-      <p>
-        Type-A methods read water data: TMR against depth and field size, and scatter factors.
-        Loading a measured table is not available in this build yet.
-      </p>
+    <label className="inline file-input">
+      <span>{label}</span>
+      <input
+        type="file"
+        accept=".csv,.txt,text/csv,text/plain"
+        data-testid={testId}
+        onChange={(e) => {
+          const f = e.target.files?.[0];
+          e.target.value = '';
+          if (f) void f.text().then((t) => onText(f.name, t));
+        }}
+      />
+    </label>
+  );
+}
+
+function TablePlot({ width, check }: { width: number; check: ReturnType<typeof checkWaterDraft> }) {
+  if (!check.ok) return null;
+  const g = check.summary.tmrGrid;
+  // Up to six field sizes, spread over the table, so the curves stay readable.
+  const n = g.sidesCm.length;
+  const pick =
+    n <= 6
+      ? g.sidesCm.map((_, j) => j)
+      : [0, 1, 2, 3, 4, 5].map((k) => Math.round((k * (n - 1)) / 5));
+  const ids = pick.map((j) => `s${g.sidesCm[j]}`);
+  const styles = seriesStyles(ids.map((_, k) => `table-${k}`));
+  return (
+    <CurveChart
+      title="TMR used by the engine, by field size at depth"
+      testId="water-chart"
+      depthCm={g.depthsCm}
+      maxDepthCm={g.depthsCm[g.depthsCm.length - 1] ?? 1}
+      series={pick.map((j, k) => {
+        const st = styles.get(`table-${k}`)!;
+        return {
+          id: ids[k]!,
+          label: `${g.sidesCm[j]} × ${g.sidesCm[j]} cm²`,
+          color: st.color,
+          dash: st.dash,
+          values: g.tmr.map((row) => row[j] ?? null),
+        };
+      })}
+      axisLabel="TMR (ratio)"
+      xLabel="Depth in water (cm)"
+      legend
+      width={width}
+      height={260}
+      interfacesCm={[]}
+      digits={4}
+      yInclude={[0]}
+    />
+  );
+}
+
+export function WaterDataPanel({ width }: { width: number }) {
+  const draft = useWaterDraft();
+  const inCase = useAppStore((s) => s.history.present.waterData);
+  const check = checkWaterDraft(draft);
+  const set = (patch: Partial<WaterDraft>) => patchWaterDraft(patch);
+  const same =
+    check.ok && inCase !== undefined && JSON.stringify(check.waterData) === JSON.stringify(inCase);
+  return (
+    <section className="water" data-testid="water-panel">
+      <h2>Water data used by the case</h2>
+      <fieldset className="segmented">
+        <legend className="sr-only">Water data source</legend>
+        <label title="No modelled beam is available in this build yet">
+          <input type="radio" name="water-source" disabled checked={false} readOnly /> Modelled beam
+          (not available yet)
+        </label>
+        <label>
+          <input type="radio" name="water-source" checked={inCase !== undefined} readOnly />{' '}
+          Measured table
+        </label>
+      </fieldset>
+      {inCase ? (
+        <p data-testid="water-in-case">
+          In use: <strong>{inCase.fileName}</strong> ({inCase.kind.toUpperCase()}
+          {inCase.kind === 'pdd' ? ` at SSD ${inCase.ssdCm} cm` : ''})
+          {inCase.scatterFileName
+            ? ` with scatter factors ${inCase.scatterFileName}`
+            : ', no scatter factors'}
+          .{' '}
+          <button type="button" onClick={() => patchWaterDraft(draftOf(inCase))}>
+            Edit
+          </button>{' '}
+          <button type="button" onClick={() => editCase((c) => ({ ...c, waterData: undefined }))}>
+            Remove from case
+          </button>
+        </p>
+      ) : (
+        <p className="notice info">
+          No water data in this case: the type-A methods cannot run. Load a measured table below, or{' '}
+          <button type="button" onClick={() => void loadDemoTables()} data-testid="load-demo-water">
+            use the demo 6 MV table (invented data)
+          </button>
+          .
+        </p>
+      )}
+
+      <h3>Load a table</h3>
+      <div className="row">
+        <div className="field">
+          <label htmlFor="wkind">Table kind</label>
+          <select
+            id="wkind"
+            value={draft.kind}
+            onChange={(e) => set({ kind: e.target.value === 'pdd' ? 'pdd' : 'tmr' })}
+          >
+            <option value="tmr">TMR (depth × field at depth)</option>
+            <option value="pdd">PDD (depth × field at surface)</option>
+          </select>
+        </div>
+        {draft.kind === 'pdd' ? (
+          <div className="field">
+            <label htmlFor="wssd">Table SSD (cm)</label>
+            <input
+              id="wssd"
+              type="text"
+              value={draft.ssdText}
+              onChange={(e) => set({ ssdText: e.target.value })}
+            />
+          </div>
+        ) : null}
+        <div className="field">
+          <label htmlFor="wdmax">d_max (cm, blank = from table)</label>
+          <input
+            id="wdmax"
+            type="text"
+            value={draft.dMaxText}
+            onChange={(e) => set({ dMaxText: e.target.value })}
+          />
+        </div>
+        <div className="field">
+          <label htmlFor="wref">Reference dose rate (cGy/MU, blank = 1)</label>
+          <input
+            id="wref"
+            type="text"
+            value={draft.referenceText}
+            onChange={(e) => set({ referenceText: e.target.value })}
+          />
+        </div>
+      </div>
+      <div className="two-col">
+        <div>
+          <FileInput
+            label="Depth table file"
+            testId="water-file"
+            onText={(fileName, csv) => set({ fileName, csv })}
+          />
+          <label htmlFor="wcsv" className="sr-only">
+            Depth table CSV
+          </label>
+          <textarea
+            id="wcsv"
+            rows={8}
+            spellCheck={false}
+            placeholder={
+              'Paste CSV: first row "depth cm \\ field cm", field sides…; then one row per depth'
+            }
+            value={draft.csv}
+            onChange={(e) =>
+              set({ csv: e.target.value, fileName: draft.fileName || 'pasted table' })
+            }
+          />
+        </div>
+        <div>
+          <FileInput
+            label="Scatter factors file (optional)"
+            testId="scatter-file"
+            onText={(scatterFileName, scatterCsv) => set({ scatterFileName, scatterCsv })}
+          />
+          <label htmlFor="wsc" className="sr-only">
+            Scatter factors CSV
+          </label>
+          <textarea
+            id="wsc"
+            rows={8}
+            spellCheck={false}
+            placeholder="Paste CSV: field cm, S_c, S_p[, PSF]"
+            value={draft.scatterCsv}
+            onChange={(e) =>
+              set({
+                scatterCsv: e.target.value,
+                scatterFileName: draft.scatterFileName || 'pasted scatter factors',
+              })
+            }
+          />
+        </div>
+      </div>
+      {draft.csv.trim() !== '' && !check.ok ? (
+        <div className="notice error" role="alert" data-testid="water-problems">
+          <strong>The table has problems:</strong>
+          <ul>
+            {check.problems.map((p, i) => (
+              <li key={i}>{p}</li>
+            ))}
+          </ul>
+        </div>
+      ) : null}
+      {check.ok ? (
+        <div className="water-summary">
+          <p>
+            {check.summary.kind.toUpperCase()} table, depths {check.summary.depthRangeCm[0]}–
+            {check.summary.depthRangeCm[1]} cm, fields {check.summary.fieldRangeCm[0]}–
+            {check.summary.fieldRangeCm[1]} cm, d_max {check.summary.dMaxCm} cm
+            {check.summary.dMaxInferred ? ' (from the table)' : ''}; SHA-256{' '}
+            <code>{check.summary.sha256.slice(0, 12)}</code>.
+          </p>
+          {check.summary.notes.length ? (
+            <ul className="hint">
+              {check.summary.notes.map((n, i) => (
+                <li key={i}>{n}</li>
+              ))}
+            </ul>
+          ) : null}
+          <p className="hint">{check.summary.source}</p>
+          <button
+            type="button"
+            className="primary"
+            disabled={same}
+            data-testid="use-water"
+            onClick={() => editCase((c) => ({ ...c, waterData: check.waterData }))}
+          >
+            {same ? 'In use by the case' : 'Use this table in the case'}
+          </button>{' '}
+          <button type="button" onClick={() => patchWaterDraft({ ...EMPTY_WATER_DRAFT })}>
+            Clear
+          </button>
+          <TablePlot width={width} check={check} />
+          {check.summary.scatter ? (
+            <table className="point-table">
+              <caption>Scatter factors</caption>
+              <thead>
+                <tr>
+                  <th scope="col">Field (cm)</th>
+                  <th scope="col">S_c</th>
+                  <th scope="col">S_p</th>
+                  {check.summary.scatter.psf ? <th scope="col">PSF</th> : null}
+                </tr>
+              </thead>
+              <tbody>
+                {check.summary.scatter.sidesCm.map((s, i) => (
+                  <tr key={s}>
+                    <td className="num">{s}</td>
+                    <td className="num">{check.summary.scatter!.sc[i]?.toFixed(4)}</td>
+                    <td className="num">{check.summary.scatter!.sp[i]?.toFixed(4)}</td>
+                    {check.summary.scatter!.psf ? (
+                      <td className="num">{check.summary.scatter!.psf[i]?.toFixed(4)}</td>
+                    ) : null}
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          ) : null}
+        </div>
+      ) : null}
     </section>
   );
 }

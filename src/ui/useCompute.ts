@@ -15,22 +15,24 @@ export function useCompute(): void {
     const started = new Map<number, number>();
     const runner = makeLatestOnly(
       (raw: LaminaCase): Promise<CalcAnswer> => getComputeWorker().calculate(raw, {}),
-      (result, id) => {
+      (result, id, superseded) => {
         const t0 = started.get(id);
-        started.clear();
+        started.delete(id);
         const elapsedMs = t0 === undefined ? null : performance.now() - t0;
         if (!result.ok) {
           setCalc({ status: 'error', error: String(result.error), elapsedMs });
           return;
         }
         const r = result.value;
-        if (r.ok)
-          setCalc({ status: 'done', report: r.report, problems: [], error: null, elapsedMs });
+        // A superseded result still repaints (e.g. during a drag); the newer one is on its way.
+        const status = superseded ? 'running' : 'done';
+        if (r.ok) setCalc({ status, report: r.report, problems: [], error: null, elapsedMs });
         else setCalc({ status: 'invalid', problems: r.problems, error: null, elapsedMs });
       },
       (id) => {
         started.set(id, performance.now());
         setCalc({ status: 'running', requestId: id });
+        for (const k of started.keys()) if (k < id - 1) started.delete(k);
       },
     );
     runner.request(toCaseFile(useAppStore.getState().history.present));

@@ -1,5 +1,7 @@
 // Journeys through the workbench as a user would take them, in Debian's Chromium.
 import { expect, test, type Page } from '@playwright/test';
+import { readFileSync } from 'node:fs';
+import { parseCaseText } from '../../src/io/caseFile';
 
 async function expectNoNaN(page: Page) {
   const text = await page.locator('body').innerText();
@@ -24,4 +26,150 @@ test('shows the title, the cautions and the slab strip of the starting case', as
   await expect(page.getByTestId('calc-status')).toContainText('calculated in');
   await page.screenshot({ path: testInfo.outputPath('start.png'), fullPage: true });
   await expectNoNaN(page);
+});
+
+test('builds a three-layer lung case by hand, saves it, and finds it restored after a reload', async ({
+  page,
+}, testInfo) => {
+  await page.getByTestId('preset').selectOption('water');
+  await expect(page.getByTestId('layer-2')).toHaveCount(0);
+  await page.getByTestId('add-layer').click();
+  await page.getByTestId('add-layer').click();
+  await page.getByTestId('layer-2-material').selectOption('lung');
+  await page.getByTestId('layer-1-thickness').fill('3');
+  await page.getByTestId('layer-2-thickness').fill('6');
+  await page.getByTestId('layer-3-thickness').fill('10');
+  // A typed value that breaks a rule stays in the field, with a message naming the field.
+  await page.getByTestId('layer-3-density').fill('-1');
+  await expect(page.getByText('Layer 3 density: must be > 0 g/cm³')).toBeVisible();
+  await expect(page.getByTestId('layer-3-density')).toHaveValue('-1');
+  await page.getByTestId('layer-3-density').fill('');
+  await expect(page.getByTestId('slab-2')).toContainText('Lung');
+  await page.screenshot({ path: testInfo.outputPath('built-case.png'), fullPage: true });
+
+  const download = page.waitForEvent('download');
+  await page.getByTestId('save').click();
+  const file = await download;
+  const saved = await file.path();
+  const parsed = parseCaseText(readFileSync(saved, 'utf8'));
+  expect(parsed.ok).toBe(true);
+  if (parsed.ok) {
+    expect(parsed.value.layers.map((l) => [l.materialId, l.thicknessCm])).toEqual([
+      ['water', 3],
+      ['lung', 6],
+      ['water', 10],
+    ]);
+  }
+
+  await page.waitForTimeout(600); // autosave is debounced (400 ms)
+  await page.reload();
+  await expect(page.getByTestId('layer-2-material')).toHaveValue('lung');
+  await expect(page.getByTestId('layer-2-thickness')).toHaveValue('6');
+  await expect(page.getByTestId('layer-3-thickness')).toHaveValue('10');
+  await expectNoNaN(page);
+});
+
+test('opening an invalid case file lists its problems and keeps the current case', async ({
+  page,
+}) => {
+  await page.getByTestId('open-file').setInputFiles({
+    name: 'broken.json',
+    mimeType: 'application/json',
+    buffer: Buffer.from(
+      JSON.stringify({
+        format: 'lamina.case',
+        version: 1,
+        name: 'broken',
+        beam: { energy: '6MV', setup: { kind: 'SSD', ssdCm: 100 }, fieldXCm: 10, fieldYCm: 10 },
+        layers: [{ materialId: 'lung', thicknessCm: -2 }],
+        points: [],
+      }),
+    ),
+  });
+  await expect(page.getByTestId('file-notice')).toContainText('broken.json was not opened');
+  await expect(page.getByTestId('file-notice')).toContainText('layers[0].thicknessCm');
+  await expect(page.getByTestId('layer-3')).toBeVisible(); // the chest preset is still there
+});
+
+test('dragging the lung’s lower boundary 2 cm deeper thickens the lung, and undo restores it', async ({
+  page,
+}, testInfo) => {
+  await page.getByTestId('preset').selectOption('chest');
+  await expect(page.getByTestId('layer-2-thickness')).toHaveValue('8');
+  await page.getByTestId('quick-demo-water').click();
+  const rtmrCell = page.getByTestId('dose-rtmr-P1');
+  await expect(rtmrCell).toHaveText(/^\d+\.\d{3}/);
+  const before = await rtmrCell.innerText();
+
+  const handle = page.getByTestId('boundary-2').locator('rect.handle-hit');
+  const box = (await handle.boundingBox())!;
+  const lungBox = (await page.getByTestId('slab-2').locator('rect').boundingBox())!;
+  const pxPerCm = lungBox.width / 8;
+  const x0 = box.x + box.width / 2;
+  const y0 = box.y + box.height / 2;
+  await page.mouse.move(x0, y0);
+  await page.mouse.down();
+  for (let i = 1; i <= 10; i++) await page.mouse.move(x0 + (2 * pxPerCm * i) / 10, y0);
+  await page.mouse.up();
+  await expect(page.getByTestId('layer-2-thickness')).toHaveValue('10');
+  await expect(page.getByTestId('layer-3-thickness')).toHaveValue('7');
+  await expect(rtmrCell).not.toHaveText(before);
+  await page.screenshot({ path: testInfo.outputPath('after-drag.png'), fullPage: true });
+
+  // Keyboard: Shift+ArrowLeft moves the focused boundary 1 cm shallower.
+  await page.getByTestId('boundary-2').focus();
+  await page.keyboard.press('Shift+ArrowLeft');
+  await expect(page.getByTestId('layer-2-thickness')).toHaveValue('9');
+  await page.keyboard.press('ArrowRight');
+  await expect(page.getByTestId('layer-2-thickness')).toHaveValue('9.1');
+
+  await page.getByTestId('undo').click();
+  await page.getByTestId('undo').click();
+  await page.getByTestId('undo').click();
+  await expect(page.getByTestId('layer-2-thickness')).toHaveValue('8');
+  await page.getByTestId('redo').click();
+  await expect(page.getByTestId('layer-2-thickness')).toHaveValue('10');
+  await expectNoNaN(page);
+});
+
+test('with the demo water table every method is plotted and a method can be toggled off', async ({
+  page,
+}, testInfo) => {
+  await page.getByTestId('quick-demo-water').click();
+  const chart = page.getByTestId('dose-chart');
+  await expect(chart.locator('path.curve[data-method="rtmr"]')).toHaveCount(1);
+  const curves = await chart.locator('path.curve').count();
+  expect(curves).toBeGreaterThanOrEqual(5);
+  for (const d of await chart
+    .locator('path.curve')
+    .evaluateAll((ps) => ps.map((p) => p.getAttribute('d'))))
+    expect(d).toMatch(/^M[\d.]+,[\d.]+L/); // a drawn line, not an empty path
+  await page.getByTestId('toggle-rtmr').uncheck();
+  await expect(chart.locator('path.curve[data-method="rtmr"]')).toHaveCount(0);
+  await expect(chart.locator('path.curve')).toHaveCount(curves - 1);
+  await expect(page.getByTestId('dose-rtmr-P1')).toHaveCount(0);
+  // Crosshair readout lists every shown method at the hovered depth.
+  const box = (await chart.locator('rect.hit').boundingBox())!;
+  await page.mouse.move(box.x + box.width * 0.4, box.y + box.height / 2);
+  await expect(chart.locator('.readout')).toContainText('depth');
+  await expect(chart.locator('.readout-row')).toHaveCount(curves - 1);
+  await page.screenshot({ path: testInfo.outputPath('dose-view.png'), fullPage: true });
+  await page.getByRole('tab', { name: 'Correction factors' }).click();
+  await expect(page.getByTestId('cf-chart')).toBeVisible();
+  await expect(page.getByTestId('radiological-chart')).toBeVisible();
+  await page.screenshot({ path: testInfo.outputPath('cf-view.png'), fullPage: true });
+  await page.getByRole('tab', { name: 'Water data' }).click();
+  await expect(page.getByTestId('water-chart')).toBeVisible();
+  await page.screenshot({ path: testInfo.outputPath('water-view.png'), fullPage: true });
+  await expectNoNaN(page);
+});
+
+test('a pasted water table with a bad cell is reported by row and column', async ({ page }) => {
+  await page.getByRole('tab', { name: 'Water data' }).click();
+  await page
+    .getByLabel('Depth table CSV')
+    .fill('depth cm \\ field cm,5,10\n0,0.5,0.5\n1.5,1.0,abc\n5,0.9,0.92\n');
+  await expect(page.getByTestId('water-problems')).toContainText('row 3');
+  await expect(page.getByTestId('water-problems')).toContainText('column 3 (C)');
+  await expect(page.getByTestId('use-water')).toHaveCount(0);
 });

@@ -7,51 +7,64 @@ function deferred<T>() {
   return { promise, resolve };
 }
 
+const flush = async () => {
+  for (let i = 0; i < 4; i++) await Promise.resolve();
+};
+
+function harness() {
+  const pending: ReturnType<typeof deferred<number>>[] = [];
+  const started: number[] = [];
+  const delivered: { value: number; superseded: boolean }[] = [];
+  const runner = makeLatestOnly(
+    (input: number) => {
+      const d = deferred<number>();
+      pending.push(d);
+      started.push(input);
+      return d.promise;
+    },
+    (r, _id, superseded) => {
+      if (r.ok) delivered.push({ value: r.value, superseded });
+    },
+  );
+  return { pending, started, delivered, runner };
+}
+
 describe('makeLatestOnly(...)', () => {
-  it('drops stale results and replaces waiting requests so the newest edit wins', async () => {
-    const pending: { input: number; d: ReturnType<typeof deferred<number>> }[] = [];
-    const started: number[] = [];
-    const delivered: number[] = [];
-    const runner = makeLatestOnly(
-      (input: number) => {
-        const d = deferred<number>();
-        pending.push({ input, d });
-        started.push(input);
-        return d.promise;
-      },
-      (r) => {
-        if (r.ok) delivered.push(r.value);
-      },
-    );
-    runner.request(1);
-    runner.request(2);
-    runner.request(3); // replaces 2 while 1 runs
-    expect(started).toEqual([1]);
-    pending[0]!.d.resolve(10);
-    await Promise.resolve();
-    await Promise.resolve();
-    expect(delivered).toEqual([]); // 1 is stale
-    expect(started).toEqual([1, 3]); // 2 never ran
-    pending[1]!.d.resolve(30);
-    await Promise.resolve();
-    await Promise.resolve();
-    expect(delivered).toEqual([30]);
+  it('replaces a waiting request with a newer one, so edits never queue', async () => {
+    const h = harness();
+    h.runner.request(1);
+    h.runner.request(2);
+    h.runner.request(3); // replaces 2 while 1 runs
+    expect(h.started).toEqual([1]);
+    h.pending[0]!.resolve(10);
+    await flush();
+    expect(h.started).toEqual([1, 3]); // 2 never ran
+    expect(h.delivered).toEqual([{ value: 10, superseded: true }]); // repaint during a drag
+    h.pending[1]!.resolve(30);
+    await flush();
+    expect(h.delivered.at(-1)).toEqual({ value: 30, superseded: false });
   });
 
-  it('cancel() ignores the result of a request already running', async () => {
-    const d = deferred<number>();
-    const delivered: number[] = [];
-    const runner = makeLatestOnly(
-      () => d.promise,
-      (r) => {
-        if (r.ok) delivered.push(r.value);
-      },
-    );
-    runner.request(1);
-    runner.cancel();
-    d.resolve(5);
-    await Promise.resolve();
-    await Promise.resolve();
-    expect(delivered).toEqual([]);
+  it('cancel() drops the result of a request already running and anything waiting', async () => {
+    const h = harness();
+    h.runner.request(1);
+    h.runner.request(2);
+    h.runner.cancel();
+    h.pending[0]!.resolve(5);
+    await flush();
+    expect(h.delivered).toEqual([]);
+    expect(h.started).toEqual([1]);
+  });
+
+  it('never shows an older result after a newer one', async () => {
+    const h = harness();
+    const first = h.runner.request(1);
+    h.pending[0]!.resolve(1);
+    await flush();
+    const second = h.runner.request(2);
+    expect(second).toBeGreaterThan(first);
+    h.pending[1]!.resolve(2);
+    await flush();
+    expect(h.delivered.map((d) => d.value)).toEqual([1, 2]);
   });
 });
