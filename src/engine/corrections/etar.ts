@@ -7,6 +7,12 @@ import { radiologicalDepthCm } from '../phantom/slabPhantom';
 import { checkedCf, collectingRecorder, type TypeAMethod } from './correctionTypes';
 import { exponentialKernelWeights, weightedDensity } from './etarScatterWeights';
 
+/** Default scatter length λ = 1/μ_eff; 25 cm when the table gives no positive slope. */
+function scatterLengthCm(wd: Parameters<typeof effectiveAttenuationPerCm>[0]): number {
+  const mu = effectiveAttenuationPerCm(wd);
+  return mu > 0 && Number.isFinite(mu) ? 1 / mu : 25;
+}
+
 export const etarMethod: TypeAMethod = {
   id: 'etar',
   label: 'Equivalent TAR',
@@ -25,7 +31,7 @@ export const etarMethod: TypeAMethod = {
     if (rhoTilde === undefined) {
       const weightsOf =
         options.etarWeights ??
-        exponentialKernelWeights(options.etarScatterLengthCm ?? 1 / effectiveAttenuationPerCm(wd));
+        exponentialKernelWeights(options.etarScatterLengthCm ?? scatterLengthCm(wd));
       rhoTilde = weightedDensity(phantom, weightsOf(phantom, pointDepthCm, sideAtDepthCm));
     }
     const dEff = radiologicalDepthCm(phantom, pointDepthCm);

@@ -119,3 +119,38 @@ describe('calculateCase with type-A methods', () => {
     expectRelClose(f.inverseSquare, (101.5 / 105) ** 2, 1e-14);
   });
 });
+
+describe('type-A results beyond the table', () => {
+  it('points deeper than the table are clamped, flagged and finite, never NaN', () => {
+    const tmr = 'd,5,10,20\n0,0.5,0.5,0.5\n1.5,1,1,1\n10,0.76,0.78,0.8\n20,0.52,0.53,0.55\n';
+    const raw = JSON.parse(readFileSync('public/cases/lung-slab-6mv.json', 'utf8')) as Record<
+      string,
+      unknown
+    >;
+    const v = validateCase({
+      ...raw,
+      points: [{ id: 'deep', depthCm: 19.5 }],
+      layers: [{ materialId: 'water', thicknessCm: 20 }],
+      waterData: { kind: 'tmr', fileName: 'short.csv', csv: tmr, dMaxCm: 1.5 },
+    });
+    if (!v.ok) throw new Error(JSON.stringify(v.problems));
+    const r = calculateCase(v.value, { methods: TYPE_A_METHOD_IDS });
+    for (const m of r.methods) {
+      const p = m.points[0];
+      // a coarse 4-depth table near its deep edge: whatever the look-ups, a number or null
+      expect(p?.cf === null || Number.isFinite(p?.cf)).toBe(true);
+      for (const x of m.curve.dosePerMuCGy) expect(x === null || Number.isFinite(x)).toBe(true);
+    }
+    // a 30 cm deep point in the same water: beyond the table's 20 cm → flagged
+    const deeper = validateCase({
+      ...raw,
+      points: [{ id: 'deeper', depthCm: 30 }],
+      layers: [{ materialId: 'water', thicknessCm: 30 }],
+      waterData: { kind: 'tmr', fileName: 'short.csv', csv: tmr, dMaxCm: 1.5 },
+    });
+    if (!deeper.ok) throw new Error(JSON.stringify(deeper.problems));
+    const w = calculateCase(deeper.value, { methods: ['water'] }).methods[0];
+    expect(w?.points[0]?.flags.some((f) => /extrapolated: depth 30\.00 cm/.test(f))).toBe(true);
+    expect(w?.points[0]?.dosePerMuCGy).toBeGreaterThan(0);
+  });
+});
