@@ -11,6 +11,8 @@ export interface McScenario {
   /** Field sides at 100 cm from the source (cm). */
   fieldXCm: number;
   fieldYCm: number;
+  /** Parallel beam (no divergence, field sides as given at every depth); for validation. */
+  parallel?: boolean;
 }
 
 export interface McBinning {
@@ -49,8 +51,8 @@ export function scoringGrid(s: McScenario, binning: McBinning): ScoringGrid {
   const halfYCm = new Float64Array(nDepth);
   for (let i = 0; i < nDepth; i++) {
     const zc = (i + 0.5) * dz;
-    halfXCm[i] = fieldAtDepthCm(s.fieldXCm, s.ssdCm, zc) / 2;
-    halfYCm[i] = fieldAtDepthCm(s.fieldYCm, s.ssdCm, zc) / 2;
+    halfXCm[i] = (s.parallel ? s.fieldXCm : fieldAtDepthCm(s.fieldXCm, s.ssdCm, zc)) / 2;
+    halfYCm[i] = (s.parallel ? s.fieldYCm : fieldAtDepthCm(s.fieldYCm, s.ssdCm, zc)) / 2;
   }
   const halfMax = (halfXCm[nDepth - 1] as number) + binning.lateralMarginCm;
   const nLateral = 2 * Math.ceil(halfMax / binning.lateralBinCm);

@@ -339,11 +339,13 @@ export class Transport {
           const tMid = t; // energy at the hinge
           const pc2 = tMid * (tMid + 2 * M);
           const betaCP = pc2 / (tMid + M);
-          const xOverX0 = step / (this.x0Cm[region] as number);
-          const theta0 = Math.max(
-            0,
-            (13.6 / betaCP) * Math.sqrt(xOverX0) * (1 + 0.038 * Math.log(xOverX0)),
-          );
+          // Highland's log term is not additive over steps: evaluated per short step it loses
+          // ~20 % of the angular variance over a track. Here the variance is additive in the
+          // step (√(x/X0)) and the log term uses the residual path length t/S (track scale).
+          const x0 = this.x0Cm[region] as number;
+          const residual = Math.max(step, tMid / sTot) / x0;
+          const theta0 =
+            (13.6 / betaCP) * Math.sqrt(step / x0) * Math.max(0, 1 + 0.038 * Math.log(residual));
           const theta = theta0 * Math.sqrt(-2 * Math.log(rng.next()));
           d.u = u;
           d.v = v;
