@@ -1,14 +1,18 @@
 // `npm run calc -- <case.json> [--json] [--methods id,id,…]`: the same engine as the page, in Node.
 import { readFileSync } from 'node:fs';
-import { calculateCase } from '../compute/calculateCase';
-import { describeProblems, parseCaseText } from '../io/caseFile';
+import { describeProblems } from '../io/caseFile';
 import { parseArgs } from './args';
-import { formatReport } from './formatReport';
+import { runBatch } from './batch';
+import { calculateDocument, jsonOf, loadDocument, planOptionsOf, textOf } from './checkCommand';
 import { WATER_TABLE_USAGE, waterTableFromFlags } from './waterTableArgs';
 
-const USAGE = `Usage: npm run calc -- <case.json> [--json] [--methods id,id,...]
-  --json          print one JSON document (format "lamina.calc")
+const USAGE = `Usage: npm run calc -- <case.json | plan.json> [--json] [--methods id,id,...]
+       npm run calc -- --batch <file> <file> ...   (one summary row per file; exit 1 if any check fails)
+  --json          print one JSON document (format "lamina.calc" with a "check" section; a plan
+                  file prints "lamina.plancalc")
   --methods LIST  comma-separated method ids to compute (default: all available)
+  --tolerances H,X  check tolerances in % for homogeneous and heterogeneous paths (default 2,5)
+  --check-method ID  method whose verdict decides the check (default: rtmr when available)
 ${WATER_TABLE_USAGE}`;
 
 function main(argv: string[]): number {
@@ -23,6 +27,21 @@ function main(argv: string[]): number {
     console.error(USAGE);
     return args.flags.has('help') ? 0 : 2;
   }
+  const table = waterTableFromFlags(args.flags);
+  if (table && !table.ok) {
+    console.error(`invalid water data\n${table.problems.join('\n')}`);
+    return 2;
+  }
+  let options;
+  try {
+    options = { ...planOptionsOf(args.flags), ...(table ? { waterData: table.waterData } : {}) };
+  } catch (e) {
+    console.error(`${(e as Error).message}\n${USAGE}`);
+    return 2;
+  }
+  const json = args.flags.get('json') === true;
+  if (args.flags.get('batch') === true || args.files.length > 1)
+    return runBatch(args.files, options, json);
   const file = args.files[0] as string;
   let text: string;
   try {
@@ -31,30 +50,17 @@ function main(argv: string[]): number {
     console.error(`${file}: cannot read (${(e as Error).message})`);
     return 2;
   }
-  const parsed = parseCaseText(text);
-  if (!parsed.ok) {
-    console.error(`${file}: invalid case file\n${describeProblems(parsed.problems)}`);
+  const doc = loadDocument(text);
+  const result = calculateDocument(doc, options);
+  if (!doc.parsed.ok || !result) {
+    const problems = doc.parsed.ok ? [] : doc.parsed.problems;
+    console.error(
+      `${file}: invalid ${doc.isPlan ? 'plan' : 'case'} file\n${describeProblems(problems)}`,
+    );
     return 2;
   }
-  const methodsFlag = args.flags.get('methods');
-  const methods =
-    typeof methodsFlag === 'string'
-      ? methodsFlag
-          .split(',')
-          .map((s) => s.trim())
-          .filter(Boolean)
-      : undefined;
-  const table = waterTableFromFlags(args.flags);
-  if (table && !table.ok) {
-    console.error(`invalid water data\n${table.problems.join('\n')}`);
-    return 2;
-  }
-  const report = calculateCase(parsed.value, {
-    ...(methods ? { methods } : {}),
-    ...(table ? { waterData: table.waterData } : {}),
-  });
-  if (args.flags.get('json') === true) process.stdout.write(`${JSON.stringify(report, null, 2)}\n`);
-  else process.stdout.write(`${formatReport(report)}\n`);
+  if (json) process.stdout.write(`${JSON.stringify(jsonOf(result, doc.isPlan), null, 2)}\n`);
+  else process.stdout.write(`${textOf(result, doc.isPlan)}\n`);
   return 0;
 }
 

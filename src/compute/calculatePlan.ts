@@ -2,6 +2,9 @@
 // (MU for the prescription, differences from the planning system, verdicts, sums over beams).
 // Plain serialisable data; runs in a worker, on the main thread and in Node.
 import { calculateCase, type CalcOptions, type CalcReport } from './calculateCase';
+import { waterDataForCase } from './typeAForCase';
+import { ssdCmOf } from '../engine/beam/geometry';
+import { dosePerMuFactors, type DosePerMuFactors } from '../engine/check/dosePerMu';
 import { checkPlan, type CheckBeamInput, type PlanCheck } from '../engine/check/planCheck';
 import { DEFAULT_TOLERANCES, type Tolerances } from '../engine/check/tolerance';
 import type { LaminaPlan } from '../io/planFile';
@@ -18,6 +21,8 @@ export interface PlanBeamReport {
   label: string;
   weight: number;
   report: CalcReport;
+  /** Water dose-per-MU factor chain (CF = 1) at each point, when the beam has water data. */
+  waterChains: Record<string, DosePerMuFactors>;
 }
 
 export interface PlanReport {
@@ -48,6 +53,26 @@ export function checkInputOf(
   };
 }
 
+/** The water factor chain at each point of a case (empty without water data). */
+export function waterChainsOf(
+  c: LaminaPlan['beams'][number]['case'],
+  options: CalcOptions,
+): Record<string, DosePerMuFactors> {
+  const wd = waterDataForCase(c, options.waterData);
+  const out: Record<string, DosePerMuFactors> = {};
+  if (!wd) return out;
+  for (const p of c.points)
+    out[p.id] = dosePerMuFactors({
+      waterData: wd,
+      ssdCm: ssdCmOf(c.beam.setup),
+      depthCm: p.depthCm,
+      fieldXCm: c.beam.fieldXCm,
+      fieldYCm: c.beam.fieldYCm,
+      cf: 1,
+    });
+  return out;
+}
+
 export function calculatePlan(plan: LaminaPlan, options: PlanCalcOptions = {}): PlanReport {
   const { tolerances, checkMethodId, ...calcOptions } = options;
   const beams = plan.beams.map((b) => ({
@@ -55,6 +80,7 @@ export function calculatePlan(plan: LaminaPlan, options: PlanCalcOptions = {}): 
     label: b.label || b.case.name || b.id,
     weight: b.weight,
     report: calculateCase(b.case, calcOptions),
+    waterChains: waterChainsOf(b.case, calcOptions),
   }));
   const check = checkPlan(
     beams.map((b, i) =>

@@ -52,7 +52,10 @@ export interface CheckOptions {
 export interface MethodPointCheck {
   methodId: string;
   dosePerMuCGy: number | null;
-  /** MU for this beam's share of the prescription (prescription point only). */
+  /**
+   * MU to deliver this beam's share of the prescription (prescription point), else the planning
+   * system's dose at the point.
+   */
   mu: number | null;
   muDiffPercent: number | null;
   /** Dose at the point for the planning system's MU (cGy). */
@@ -160,7 +163,8 @@ function checkBeam(
         const dpm =
           beam.methods.find((m) => m.id === id)?.points.find((q) => q.id === p.id)?.dosePerMuCGy ??
           null;
-        const checkMu = prescribedDoseCGy === null ? null : muForDose(prescribedDoseCGy, dpm);
+        const toDeliver = prescribedDoseCGy ?? p.planningDoseCGy ?? null;
+        const checkMu = toDeliver === null ? null : muForDose(toDeliver, dpm);
         const doseCGy = mu === null ? null : doseForMu(mu, dpm);
         const muDiffPercent = percentDifference(checkMu, mu);
         const doseDiffPercent = percentDifference(doseCGy, p.planningDoseCGy);

@@ -173,7 +173,7 @@ export function buildReportModel(input: ReportInput): ReportModel {
   blocks.push({ kind: 'heading', text: 'Total at each point (sum over beams)' });
   blocks.push({ kind: 'table', headers: TOTAL_TABLE_HEADERS, rows: totalTableRows(check) });
   for (const b of result.beams)
-    blocks.push(...beamBlocks(b.id, plan, b.report, input.waterChains?.[b.id]));
+    blocks.push(...beamBlocks(b.id, plan, b.report, input.waterChains?.[b.id] ?? b.waterChains));
   blocks.push({ kind: 'heading', text: 'Cautions' });
   blocks.push({ kind: 'list', items: result.beams[0]?.report.cautions ?? [] });
   blocks.push({

@@ -120,4 +120,18 @@ describe('checkPlan', () => {
     expect(r.beams[0]?.points[0]?.methods[0]?.mu).toBeNull();
     expect(r.beams[0]?.points[0]?.methods[0]?.verdict).toBe('none');
   });
+
+  it('checkPlan(...) without a prescription gives the MU for the planning dose at each point', () => {
+    // 100 cGy planned at 0.8 cGy/MU → 125 MU; planning MU 120 → +4.17 % (exact arithmetic).
+    const r = checkPlan(
+      [beam('AP', 1, { water: 0.8 }, { planningMu: 120, planningDoseCGy: 100 })],
+      {
+        tolerances: DEFAULT_TOLERANCES,
+      },
+    );
+    const m = r.beams[0]?.points[0]?.methods[0];
+    expectRelClose(m?.mu as number, 125, 1e-12);
+    expectRelClose(m?.muDiffPercent as number, (100 * 5) / 120, 1e-12);
+    expect(r.beams[0]?.points[0]?.prescribedDoseCGy).toBeNull();
+  });
 });

@@ -1,0 +1,91 @@
+// Batch mode: `npm run calc -- --batch a.json b.json …` (or several files) prints one summary
+// row per case or plan; exit code 1 when any check verdict fails, 2 when a file cannot be read
+// or is invalid (problems printed to stderr), else 0.
+import { readFileSync } from 'node:fs';
+import { summarizeCheck } from '../engine/check/checkSummary';
+import { describeProblems } from '../io/caseFile';
+import type { PlanCalcOptions } from '../compute/calculatePlan';
+import { calculateDocument, loadDocument } from './checkCommand';
+import { table } from './formatReport';
+
+export interface BatchRow {
+  file: string;
+  name: string;
+  beams: number;
+  method: string | null;
+  largestDiffPercent: number | null;
+  comparisons: number;
+  verdict: 'pass' | 'fail' | 'none' | 'invalid';
+}
+
+export function batchRows(files: readonly string[], options: PlanCalcOptions): BatchRow[] {
+  return files.map((file): BatchRow => {
+    const invalid = (message: string): BatchRow => {
+      console.error(`${file}: ${message}`);
+      return {
+        file,
+        name: '',
+        beams: 0,
+        method: null,
+        largestDiffPercent: null,
+        comparisons: 0,
+        verdict: 'invalid',
+      };
+    };
+    let text: string;
+    try {
+      text = readFileSync(file, 'utf8');
+    } catch (e) {
+      return invalid(`cannot read (${(e as Error).message})`);
+    }
+    const doc = loadDocument(text);
+    if (!doc.parsed.ok) return invalid(`invalid file\n${describeProblems(doc.parsed.problems)}`);
+    const result = calculateDocument(doc, options);
+    if (!result) return invalid('not calculated');
+    const s = summarizeCheck(result.check);
+    return {
+      file,
+      name: result.planName,
+      beams: result.beams.length,
+      method: s.methodId,
+      largestDiffPercent: s.largestDiffPercent,
+      comparisons: s.comparisons,
+      verdict: s.verdict,
+    };
+  });
+}
+
+export function batchExitCode(rows: readonly BatchRow[]): number {
+  if (rows.some((r) => r.verdict === 'invalid')) return 2;
+  return rows.some((r) => r.verdict === 'fail') ? 1 : 0;
+}
+
+export function formatBatch(rows: readonly BatchRow[]): string {
+  const body = table(
+    ['file', 'name', 'beams', 'method', 'largest diff %', 'comparisons', 'verdict'],
+    rows.map((r) => [
+      r.file,
+      r.name,
+      String(r.beams),
+      r.method ?? '—',
+      r.largestDiffPercent === null
+        ? '—'
+        : `${r.largestDiffPercent > 0 ? '+' : ''}${r.largestDiffPercent.toFixed(2)}`,
+      String(r.comparisons),
+      r.verdict,
+    ]),
+  );
+  const fails = rows.filter((r) => r.verdict === 'fail').length;
+  const invalid = rows.filter((r) => r.verdict === 'invalid').length;
+  return `${body}\n\n${rows.length} file(s): ${fails} outside tolerance, ${invalid} invalid`;
+}
+
+export function runBatch(
+  files: readonly string[],
+  options: PlanCalcOptions,
+  json: boolean,
+): number {
+  const rows = batchRows(files, options);
+  process.stdout.write(json ? `${JSON.stringify(rows, null, 2)}\n` : `${formatBatch(rows)}\n`);
+  return batchExitCode(rows);
+}

@@ -1,0 +1,84 @@
+// The check part of the command line: one case or plan file calculated with its point check
+// (text or JSON), and the options shared with batch mode.
+import { calculatePlan, type PlanCalcOptions, type PlanReport } from '../compute/calculatePlan';
+import { DEFAULT_TOLERANCES } from '../engine/check/tolerance';
+import { PLAN_FORMAT } from '../io/planSchema';
+import { validatePlan, type PlanParseResult } from '../io/planFile';
+import { formatCheck } from './formatCheck';
+import { formatReport } from './formatReport';
+
+export interface LoadedDocument {
+  isPlan: boolean;
+  parsed: PlanParseResult;
+}
+
+/** Parse case-or-plan text; a case file becomes a one-beam plan. */
+export function loadDocument(text: string): LoadedDocument {
+  let raw: unknown;
+  try {
+    raw = JSON.parse(text);
+  } catch (e) {
+    return {
+      isPlan: false,
+      parsed: {
+        ok: false,
+        problems: [{ path: '(file)', message: `not valid JSON: ${(e as Error).message}` }],
+      },
+    };
+  }
+  const isPlan =
+    typeof raw === 'object' && raw !== null && (raw as { format?: unknown }).format === PLAN_FORMAT;
+  return { isPlan, parsed: validatePlan(raw) };
+}
+
+/** Options from --methods, --tolerances H,X and --check-method ID; throws on a malformed value. */
+export function planOptionsOf(flags: Map<string, string | true>): PlanCalcOptions {
+  const options: PlanCalcOptions = {};
+  const methods = flags.get('methods');
+  if (typeof methods === 'string')
+    options.methods = methods
+      .split(',')
+      .map((s) => s.trim())
+      .filter(Boolean);
+  const tol = flags.get('tolerances');
+  if (typeof tol === 'string') {
+    const [h, x] = tol.split(',').map(Number);
+    if (h === undefined || x === undefined || !(h > 0) || !(x > 0))
+      throw new Error(
+        '--tolerances needs two positive percentages: homogeneous,heterogeneous (e.g. 2,5)',
+      );
+    options.tolerances = { homogeneousPercent: h, heterogeneousPercent: x };
+  }
+  const method = flags.get('check-method');
+  if (typeof method === 'string') options.checkMethodId = method;
+  return options;
+}
+
+/** JSON output: a case keeps the "lamina.calc" document with a `check` section; a plan prints the plan report. */
+export function jsonOf(result: PlanReport, isPlan: boolean): unknown {
+  if (isPlan) return result;
+  return { ...(result.beams[0]?.report ?? {}), check: result.check };
+}
+
+export function textOf(result: PlanReport, isPlan: boolean): string {
+  const parts: string[] = [];
+  if (isPlan) parts.push(`Plan: ${result.planName || '(unnamed)'} (${result.beams.length} beams)`);
+  for (const b of result.beams) {
+    if (isPlan) parts.push(`\n=== Beam ${b.id}${b.label !== b.id ? ` — ${b.label}` : ''} ===`);
+    parts.push(formatReport(b.report));
+  }
+  parts.push('');
+  parts.push(formatCheck(result.check));
+  return parts.join('\n');
+}
+
+export function calculateDocument(
+  doc: LoadedDocument,
+  options: PlanCalcOptions,
+): PlanReport | null {
+  if (!doc.parsed.ok) return null;
+  return calculatePlan(doc.parsed.value, {
+    ...options,
+    tolerances: options.tolerances ?? doc.parsed.value.tolerances ?? DEFAULT_TOLERANCES,
+  });
+}
