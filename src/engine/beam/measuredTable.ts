@@ -45,6 +45,9 @@ export interface MeasuredTableSummary {
   scatter?: ScatterFactorTable;
 }
 
+/** PSF without a PSF column: S_p(s) = PSF(s)/PSF(10) with PSF(10) = 1 (exact in PSF ratios). */
+export const PSF_APPROXIMATION = 'PSF not supplied: PSF(s) ≈ S_p(s), PSF(10 × 10) taken as 1';
+
 export type MeasuredTableResult =
   | { ok: true; waterData: WaterData; summary: MeasuredTableSummary }
   | { ok: false; problems: string[] };
@@ -169,7 +172,7 @@ export function buildMeasuredWaterData(input: MeasuredTableInput): MeasuredTable
       `scatter factors: ${input.scatterFileName ?? 'scatter factors'} (sha-256 ${sha256Hex(input.scatterCsv as string).slice(0, 12)})`,
     );
   else sourceParts.push('S_p not supplied: taken as 1', 'S_c not supplied: taken as 1');
-  if (!psfTable) sourceParts.push('PSF not supplied: PSF(s) ≈ S_p(s), PSF(10 × 10) taken as 1');
+  if (!psfTable) sourceParts.push(PSF_APPROXIMATION);
   if (ref === undefined) sourceParts.push('reference dose rate not supplied: 1 cGy/MU');
   const source = sourceParts.join('; ');
 
@@ -191,6 +194,7 @@ export function buildMeasuredWaterData(input: MeasuredTableInput): MeasuredTable
     sp: (s: number, r?: LookupRecorder) => sp(s, r),
     sc: (s: number, r?: LookupRecorder) => sc(s, r),
     psf: (s: number, r?: LookupRecorder) => psf(s, r),
+    ...(psfTable ? {} : { psfApproximation: PSF_APPROXIMATION }),
     referenceDosePerMuCGy: ref ?? 1,
   };
   const summary: MeasuredTableSummary = {

@@ -31,6 +31,8 @@ export interface WaterData {
   sc(sideCm: number, recorder?: LookupRecorder): number;
   /** Peak-scatter factor PSF = TAR(d_max, s) (needed by TAR-based Batho and by ETAR). */
   psf(sideCm: number, recorder?: LookupRecorder): number;
+  /** Set when `psf` is an approximation (e.g. no PSF supplied with a measured table): how it is made. */
+  psfApproximation?: string;
   /**
    * Reference dose rate: cGy per MU at d_max on the central axis, 10 × 10 cm² defined at 100 cm,
    * source-to-point distance 100 + d_max cm (SSD 100 calibration).

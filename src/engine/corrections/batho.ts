@@ -63,6 +63,7 @@ export const bathoMethod: TypeAMethod = {
   label: 'Batho power law (generalized)',
   variant: (o) =>
     `${(o.bathoTable ?? 'tmr').toUpperCase()}, no shift, μ₀ ≡ water, exponents by ρ_e, ${o.muEnRatioOfLayer ? 'dose to medium' : 'dose to water'}`,
+  usesPsf: (o) => o.bathoTable === 'tar',
   correct(phantom, pointDepthCm, sideAtDepthCm, wd, options): CorrectionResult {
     const { recorder, flags } = collectingRecorder();
     const t = depthFunctionOf(wd, sideAtDepthCm, options.bathoTable ?? 'tmr', recorder);

@@ -39,6 +39,8 @@ export interface TypeAMethod {
   id: string;
   label: string;
   variant(options: CorrectionOptions): string;
+  /** Whether the method reads PSF with these options (its variant then names a PSF approximation). */
+  usesPsf?: (options: CorrectionOptions) => boolean;
   correct(
     phantom: SlabPhantom,
     pointDepthCm: number,

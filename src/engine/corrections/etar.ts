@@ -25,6 +25,7 @@ export const etarMethod: TypeAMethod = {
           : `ρ̃ from an exponential scatter kernel over the field (λ = ${o.etarScatterLengthCm !== undefined ? `${o.etarScatterLengthCm} cm` : '1/μ_eff'})`;
     return `TAR form (TMR × PSF ratio), s̃ = ρ̃·s_d, ${rho}`;
   },
+  usesPsf: () => true,
   correct(phantom, pointDepthCm, sideAtDepthCm, wd, options) {
     const { recorder, flags } = collectingRecorder();
     let rhoTilde = options.etarRhoTilde;

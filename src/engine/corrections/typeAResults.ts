@@ -73,7 +73,10 @@ export function typeAMethodResult(
   return {
     id: method.id,
     label: method.label,
-    variant: method.variant(opts),
+    variant:
+      wd.psfApproximation && method.usesPsf?.(opts)
+        ? `${method.variant(opts)}; ${wd.psfApproximation}`
+        : method.variant(opts),
     methodClass: method.id === 'water' ? 'none' : 'type A',
     waterData: wd.source,
     curve: { depthCm: [...g.depthCm], dosePerMuCGy: dose, cf },

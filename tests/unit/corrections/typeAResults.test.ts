@@ -5,6 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { calculateCase } from '../../../src/compute/calculateCase';
 import { NEEDS_WATER_DATA } from '../../../src/compute/typeAForCase';
 import { TYPE_A_METHOD_IDS } from '../../../src/engine/corrections/typeAMethods';
+import { buildMeasuredWaterData } from '../../../src/engine/beam/measuredTable';
 import { dosePerMuFactors } from '../../../src/engine/check/dosePerMu';
 import { parseCaseText, validateCase } from '../../../src/io/caseFile';
 import type { LaminaCase } from '../../../src/io/caseSchema';
@@ -152,5 +153,24 @@ describe('type-A results beyond the table', () => {
     const w = calculateCase(deeper.value, { methods: ['water'] }).methods[0];
     expect(w?.points[0]?.flags.some((f) => /extrapolated: depth 30\.00 cm/.test(f))).toBe(true);
     expect(w?.points[0]?.dosePerMuCGy).toBeGreaterThan(0);
+  });
+});
+
+describe('PSF approximation in the variant', () => {
+  it('ETAR and TAR-Batho name the PSF approximation when the table has no PSF column', () => {
+    const c = demoCase();
+    const r = calculateCase(c, {
+      waterData: (() => {
+        const b = buildMeasuredWaterData({ kind: 'tmr', fileName: 't.csv', csv: TMR_CSV });
+        if (!b.ok) throw new Error('table');
+        return b.waterData;
+      })(),
+      methods: ['rtmr', 'batho', 'etar'],
+      typeA: { bathoTable: 'tar' },
+    });
+    const variant = (id: string) => r.methods.find((m) => m.id === id)?.variant ?? '';
+    expect(variant('etar')).toContain('PSF not supplied: PSF(s) ≈ S_p(s)');
+    expect(variant('batho')).toContain('PSF not supplied');
+    expect(variant('rtmr')).not.toContain('PSF');
   });
 });
