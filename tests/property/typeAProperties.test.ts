@@ -157,4 +157,89 @@ describe('type-A invariants', () => {
       RUNS,
     );
   });
+
+  it('batho(...) with three media equals Khan’s T(d1)^(ρ3 − ρ2)/T(d2)^(1 − ρ2)', () => {
+    // Batho three-media form as presented by Khan (from memory): water over a slab ρ2 over the
+    // medium ρ3 holding P; d1 = depth of P below the slab, d2 = below the slab's top face
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.5, max: 5, noNaN: true }),
+        fc.double({ min: 0.1, max: 2, noNaN: true }),
+        fc.double({ min: 0.5, max: 8, noNaN: true }),
+        fc.double({ min: 0.1, max: 2, noNaN: true }),
+        fc.double({ min: 0.05, max: 10, noNaN: true }),
+        side,
+        (top, rho2, t2, rho3, into, s) => {
+          const p = slabs([
+            [1, top],
+            [rho2, t2],
+            [rho3, 20],
+          ]);
+          const d = top + t2 + into;
+          const khan = wd.tmr(into, s) ** (rho3 - rho2) / wd.tmr(into + t2, s) ** (1 - rho2);
+          const cf = cfOf(bathoMethod, p, d, s) as number;
+          // same powers in a different order; relative round-off only
+          expect(Math.abs(cf / khan - 1)).toBeLessThan(1e-12);
+        },
+      ),
+      RUNS,
+    );
+  });
+
+  it('etar(...) in a phantom of one density ρ equals TAR(ρd, ρs)/TAR(d, s)', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.1, max: 2, noNaN: true }),
+        fc.double({ min: 0.5, max: 25, noNaN: true }),
+        side,
+        (rho, d, s) => {
+          const p = slabs([
+            [rho, 10],
+            [rho, 20],
+          ]);
+          const tar = (x: number, f: number) => wd.tmr(x, f) * wd.psf(f);
+          const expected = tar(rho * d, rho * s) / tar(d, s);
+          // O'Connor scaling holds whatever the weights; ρ̃ is a weighted mean of equal densities
+          expect(Math.abs((cfOf(etarMethod, p, d, s) as number) / expected - 1)).toBeLessThan(
+            1e-12,
+          );
+        },
+      ),
+      RUNS,
+    );
+  });
+
+  it('|CF − 1| of rtmr and batho-modified grows with lung thickness and with |1 − ρ|', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.1, max: 0.8, noNaN: true }),
+        fc.double({ min: 1, max: 6, noNaN: true }),
+        fc.double({ min: 0.2, max: 3, noNaN: true }),
+        (rho, t, extra) => {
+          const at = (r: number, thick: number, m: TypeAMethod) =>
+            cfOf(
+              m,
+              slabs([
+                [1, 3],
+                [r, thick],
+                [1, 30],
+              ]),
+              3 + 6 + 3 + 5,
+              10,
+            ) as number;
+          for (const m of [rtmrMethod, bathoModifiedMethod]) {
+            expect(at(rho, t + extra, m)).toBeGreaterThan(at(rho, t, m));
+            expect(at(rho, t, m)).toBeGreaterThan(at(Math.min(rho + 0.1, 0.95), t, m));
+          }
+        },
+      ),
+      RUNS,
+    );
+  });
+
+  it('a point outside the phantom is rejected, not computed', () => {
+    const p = slabs([[1, 10]]);
+    for (const m of TYPE_A_METHODS.filter((x) => x.id !== 'water'))
+      expect(() => m.correct(p, 10.5, 10, wd, options)).toThrow(RangeError);
+  });
 });
