@@ -38,6 +38,8 @@ export interface MeasuredTableSummary {
   depthRangeCm: [number, number];
   fieldRangeCm: [number, number];
   notes: string[];
+  /** TMR(20, 10)/TMR(10, 10) when the table covers those depths and the 10 cm field. */
+  tpr2010?: number;
   /** The TMR grid the engine uses (after PDD conversion), for plotting. */
   tmrGrid: { depthsCm: number[]; sidesCm: number[]; tmr: number[][] };
   /** The file's own values, as read. */
@@ -51,6 +53,22 @@ export const PSF_APPROXIMATION = 'PSF not supplied: PSF(s) ≈ S_p(s), PSF(10 ×
 export type MeasuredTableResult =
   | { ok: true; waterData: WaterData; summary: MeasuredTableSummary }
   | { ok: false; problems: string[] };
+
+/** Typical TPR20,10 from Co-60 (≈ 0.57) to 18 MV (≈ 0.78), with a margin (typical values, from memory). */
+export const TYPICAL_TPR2010: readonly [number, number] = [0.52, 0.84];
+
+function tpr2010Of(
+  tmr: (d: number, s: number) => number,
+  depthRangeCm: readonly [number, number],
+  fieldRangeCm: readonly [number, number],
+): number | undefined {
+  const covers =
+    depthRangeCm[0] <= 10 &&
+    depthRangeCm[1] >= 20 &&
+    fieldRangeCm[0] <= 10 &&
+    fieldRangeCm[1] >= 10;
+  return covers ? tmr(20, 10) / tmr(10, 10) : undefined;
+}
 
 /** Depth of the largest value in the column whose field is nearest 10 cm. */
 export function inferDMaxCm(m: DepthFieldMatrix): number {
@@ -185,6 +203,11 @@ export function buildMeasuredWaterData(input: MeasuredTableInput): MeasuredTable
     m.sidesCm[m.sidesCm.length - 1] as number,
   ];
   const lookup = makeTmrLookup(grid);
+  const tpr2010 = tpr2010Of(lookup, depthRangeCm, fieldRangeCm);
+  if (tpr2010 !== undefined && !(tpr2010 >= TYPICAL_TPR2010[0] && tpr2010 <= TYPICAL_TPR2010[1]))
+    notes.push(
+      `TPR20,10 ${tpr2010.toFixed(3)} lies outside ${TYPICAL_TPR2010[0]}–${TYPICAL_TPR2010[1]} (Co-60 to 18 MV): check the table`,
+    );
   const waterData: WaterData = {
     source,
     dMaxCm,
@@ -207,6 +230,7 @@ export function buildMeasuredWaterData(input: MeasuredTableInput): MeasuredTable
     depthRangeCm,
     fieldRangeCm,
     notes,
+    ...(tpr2010 !== undefined ? { tpr2010 } : {}),
     tmrGrid: { depthsCm: m.depthsCm, sidesCm: m.sidesCm, tmr },
     table: m,
     ...(scatter ? { scatter } : {}),

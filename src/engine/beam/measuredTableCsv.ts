@@ -86,6 +86,25 @@ function numberCell(row: CsvRow, index: number, problems: string[]): number {
   return Number(raw);
 }
 
+const SQUARE = /^(\d+\.?\d*|\.\d+)\s*[x×*]\s*(\d+\.?\d*|\.\d+)$/i;
+
+/**
+ * A field-size cell: a side in cm, or a square written "10x10" / "10 × 10". A rectangle is refused
+ * (tables are by equivalent square; the user converts).
+ */
+function fieldCell(row: CsvRow, index: number, problems: string[]): number {
+  const raw = row.cells[index] ?? '';
+  const m = SQUARE.exec(raw);
+  if (!m) return numberCell(row, index, problems);
+  const a = Number(m[1]);
+  const b = Number(m[2]);
+  if (a === b) return a;
+  problems.push(
+    `${cellRef(row.row, index + 1)}: rectangular field "${raw}": give the equivalent square side (cm)`,
+  );
+  return NaN;
+}
+
 function capped(problems: string[]): string[] {
   return problems.length > MAX_PROBLEMS
     ? [...problems.slice(0, MAX_PROBLEMS), `… and ${problems.length - MAX_PROBLEMS} more problems`]
@@ -112,7 +131,7 @@ export function parseDepthFieldCsv(
     );
   const sidesCm: number[] = [];
   for (let c = 1; c < nCols; c++) {
-    const v = numberCell(header, c, problems);
+    const v = fieldCell(header, c, problems);
     if (Number.isNaN(v)) continue;
     if (!(v > 0)) problems.push(`${cellRef(header.row, c + 1)}: field size ${v} cm must be > 0`);
     else if (sidesCm.length > 0 && v <= (sidesCm[sidesCm.length - 1] as number))
@@ -182,7 +201,7 @@ export function parseScatterCsv(text: string): CsvResult<ScatterFactorTable> {
       problems.push(`row ${r.row}: has ${r.cells.length} cells, expected ${nCols} (ragged row)`);
       continue;
     }
-    const side = numberCell(r, 0, problems);
+    const side = fieldCell(r, 0, problems);
     if (!Number.isNaN(side)) {
       if (!(side > 0)) problems.push(`${cellRef(r.row, 1)}: field size ${side} cm must be > 0`);
       const prev = sidesCm[sidesCm.length - 1];

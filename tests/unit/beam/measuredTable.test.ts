@@ -148,3 +148,18 @@ describe('buildMeasuredWaterData (PDD table)', () => {
     expect(r.summary.notes.join(' ')).toMatch(/extrapolated linearly in field side/);
   });
 });
+
+describe('table summary', () => {
+  it('the summary gives TPR20,10 of the demo table (6 MV-like, 0.678) and no warning note', () => {
+    const { summary } = demoTmr();
+    // derived test vector: analytic 6 MV-like TMR fixture, TMR(20,10)/TMR(10,10) = 0.678 (3 decimals)
+    expectAbsClose(summary.tpr2010 as number, 0.678, 5e-4);
+    expect(summary.notes.join(' ')).not.toMatch(/TPR20,10/);
+  });
+
+  it('an implausibly flat table gets a TPR20,10 note', () => {
+    const flat = 'd,5,10,20\n0,0.9,0.9,0.9\n1.5,1,1,1\n10,0.99,0.99,0.99\n20,0.98,0.98,0.98\n';
+    const r = buildMeasuredWaterData({ kind: 'tmr', fileName: 'flat.csv', csv: flat, dMaxCm: 1.5 });
+    expect(r.ok && r.summary.notes.join(' ')).toMatch(/TPR20,10 0\.990 lies outside/);
+  });
+});

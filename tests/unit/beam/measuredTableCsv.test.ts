@@ -101,3 +101,19 @@ describe('parseScatterCsv', () => {
     expect(r.ok).toBe(false);
   });
 });
+
+describe('field-size cells', () => {
+  it('parseDepthFieldCsv reads square labels "10x10" and "10 × 10" as sides', () => {
+    const r = parseDepthFieldCsv(
+      GOOD.replace('depth cm,5,10,20', 'depth cm,5x5,10 × 10,20X20'),
+      'tmr',
+    );
+    expect(r.ok && r.value.sidesCm).toEqual([5, 10, 20]);
+  });
+
+  it('parseDepthFieldCsv refuses a rectangular field label, naming the cell', () => {
+    expect(problemsOf(GOOD.replace('depth cm,5,10,20', 'depth cm,5,10x20,20'))).toContain(
+      'row 1, column 3 (C): rectangular field "10x20": give the equivalent square side (cm)',
+    );
+  });
+});
