@@ -33,13 +33,8 @@ function delayedWorker(delays: number[]): McWorkerHandle {
 /** A worker reached through comlink over a MessageChannel (the browser path, in Node). */
 function channelWorker(): McWorkerHandle {
   const { port1, port2 } = new MessageChannel();
-  Comlink.expose(
-    { runBatch: (task: BatchTask) => runBatch(task) },
-    port1,
-  );
-  const remote = Comlink.wrap<{ runBatch(task: BatchTask): BatchTally }>(
-    port2,
-  );
+  Comlink.expose({ runBatch: (task: BatchTask) => runBatch(task) }, port1);
+  const remote = Comlink.wrap<{ runBatch(task: BatchTask): BatchTally }>(port2);
   return {
     runBatch: (task) => remote.runBatch(task),
     dispose: () => {
@@ -81,12 +76,12 @@ describe('startMonteCarlo', () => {
 
   it('cancel() stops the run; done resolves with the batches merged so far', async () => {
     let disposed = 0;
-    let run: ReturnType<typeof startMonteCarlo> | undefined;
-    run = startMonteCarlo(
+    const holder: { run?: ReturnType<typeof startMonteCarlo> } = {};
+    const run = startMonteCarlo(
       CASE,
       { ...OPTIONS, histories: 20000, batches: 40 },
       (p) => {
-        if (p.partial && p.tasksDone >= 12) run?.cancel();
+        if (p.partial && p.tasksDone >= 12) holder.run?.cancel();
       },
       {
         workers: 2,
@@ -94,6 +89,7 @@ describe('startMonteCarlo', () => {
         createWorker: () => ({ ...delayedWorker([0]), dispose: () => void disposed++ }),
       },
     );
+    holder.run = run;
     const result = await run.done;
     expect(result.batchesDone).toBeLessThan(40);
     expect(result.batchesDone).toBeGreaterThanOrEqual(2);
