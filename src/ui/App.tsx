@@ -84,6 +84,20 @@ function Notices() {
   );
 }
 
+function CalcStatus() {
+  const status = useAppStore((s) => s.calc.status);
+  const elapsed = useAppStore((s) => s.calc.elapsedMs);
+  return (
+    <span className="calc-status" aria-live="polite" data-testid="calc-status">
+      {status === 'running'
+        ? 'calculating…'
+        : elapsed !== null
+          ? `calculated in ${elapsed.toFixed(0)} ms`
+          : ''}
+    </span>
+  );
+}
+
 function CaseName() {
   const name = useAppStore((s) => s.history.present.name);
   return (
@@ -103,12 +117,10 @@ function CaseName() {
 function Workbench() {
   const tab = useAppStore((s) => s.tab);
   const report = useAppStore((s) => s.calc.report);
-  const status = useAppStore((s) => s.calc.status);
-  const elapsed = useAppStore((s) => s.calc.elapsedMs);
   const [ref, width] = useElementWidth<HTMLDivElement>();
   const showsDepth = tab === 'dose' || tab === 'cf';
   return (
-    <main className="workbench" ref={ref}>
+    <main className="workbench">
       <div role="tablist" aria-label="Views" className="tabs">
         {TABS.map((t) => (
           <button
@@ -122,15 +134,8 @@ function Workbench() {
             {t.label}
           </button>
         ))}
-        <span className="calc-status" aria-live="polite" data-testid="calc-status">
-          {status === 'running'
-            ? 'calculating…'
-            : elapsed !== null
-              ? `calculated in ${elapsed.toFixed(0)} ms`
-              : ''}
-        </span>
       </div>
-      <div role="tabpanel" className="tab-panel">
+      <div role="tabpanel" className="tab-panel" ref={ref}>
         {showsDepth ? (
           <>
             <SlabStrip width={width} />
@@ -181,6 +186,7 @@ export function App() {
       <header className="top">
         <h1>Lamina</h1>
         <span className="tagline">photon-beam heterogeneity corrections in slab phantoms</span>
+        <CalcStatus />
         <FileBar />
         <ThemeToggle />
       </header>

@@ -10,6 +10,12 @@ import { PointTable } from './PointTable';
 import { cfSeries, doseSeries, methodStyles } from './series';
 import { WarningList } from './WarningList';
 
+const SHORT_LABELS: Record<NormalisationMode, string> = {
+  dosePerMu: 'Dose per MU (cGy/MU)',
+  percentWaterDmax: '% of water maximum',
+  relativeToWater: 'Ratio to water, same depth',
+};
+
 function interfacesOf(report: CalcReport): number[] {
   return report.layers.slice(0, -1).map((l) => l.bottomCm);
 }
@@ -48,7 +54,7 @@ export function DoseView({ report, width }: { report: CalcReport; width: number 
         <div className="chart-controls">
           <MethodLegend methods={report.methods} styles={methodStyles(report)} />
           <div className="field">
-            <label htmlFor="norm">Normalisation</label>
+            <label htmlFor="norm">Normalise dose as</label>
             <select
               id="norm"
               value={mode}
@@ -56,7 +62,7 @@ export function DoseView({ report, width }: { report: CalcReport; width: number 
             >
               {(Object.keys(NORMALISATION_LABELS) as NormalisationMode[]).map((k) => (
                 <option key={k} value={k}>
-                  {NORMALISATION_LABELS[k]}
+                  {SHORT_LABELS[k]}
                 </option>
               ))}
             </select>
