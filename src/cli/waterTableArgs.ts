@@ -45,7 +45,12 @@ export function waterTableFromFlags(
   if (tmr === undefined && pdd === undefined) {
     const orphan = ['scatter', 'ssd', 'dmax', 'ref-dose'].filter((f) => flags.has(f));
     return orphan.length > 0
-      ? { ok: false, problems: [`${orphan.map((f) => `--${f}`).join(', ')} need --tmr or --pdd`] }
+      ? {
+          ok: false,
+          problems: [
+            `${orphan.map((f) => `--${f}`).join(', ')} ${orphan.length > 1 ? 'need' : 'needs'} --tmr or --pdd`,
+          ],
+        }
       : undefined;
   }
   const problems: string[] = [];
