@@ -14,6 +14,7 @@ import type { Warning } from '../engine/equilibrium';
 import { caseWarnings } from './caseWarnings';
 import type { WaterData } from '../engine/beam/waterData';
 import { isTypeAMethodId, typeAForCase, type TypeAVariants } from './typeAForCase';
+import { isTypeBMethodId, typeBForCase } from './typeBForCase';
 
 export const CALC_FORMAT = 'lamina.calc';
 export const CALC_VERSION = 1;
@@ -90,10 +91,11 @@ export function calculateCase(c: LaminaCase, options: CalcOptions = {}): CalcRep
   const grid = depthGridCm(phantom.totalThicknessCm, step);
   const requested = options.methods ?? [];
   const typeA = typeAForCase(c, phantom, grid, options.methods, options.waterData, options.typeA);
+  const typeB = typeBForCase(c, phantom, grid, options.methods);
   const unavailable = [
     ...typeA.unavailable,
     ...requested
-      .filter((id) => !isTypeAMethodId(id))
+      .filter((id) => !isTypeAMethodId(id) && !isTypeBMethodId(id))
       .map((id) => ({ id, reason: 'method not implemented yet' })),
   ];
   return {
@@ -132,7 +134,7 @@ export function calculateCase(c: LaminaCase, options: CalcOptions = {}): CalcRep
     })),
     depthCm: grid,
     radiologicalDepthCm: grid.map((d) => radiologicalDepthCm(phantom, d)),
-    methods: [...typeA.methods],
+    methods: [...typeA.methods, ...typeB],
     unavailable,
     warnings: caseWarnings(c, phantom, typeA.methods, typeA.waterData),
     cautions: [...CAUTIONS],

@@ -11,6 +11,12 @@ import {
   type MeasuredTableSummary,
 } from '../engine/beam/measuredTable';
 import type { TypeAVariants } from './typeAForCase';
+import { ssdCmOf } from '../engine/beam/geometry';
+import {
+  typeBDosePlane,
+  type DosePlane,
+  type DosePlaneOptions,
+} from '../engine/superposition/typeBMethods';
 
 /**
  * Calculation options that cross the worker boundary: plain data only. The water table travels as
@@ -57,6 +63,31 @@ export const computeApi = {
         problems: table.problems.map((message) => ({ path: 'waterTable', message })),
       };
     return { ok: true, report: calculateCase(v.value, { ...rest, waterData: table.waterData }) };
+  },
+  /**
+   * The x–z dose plane (y = 0) and lateral profiles of a case from a type-B engine (default the
+   * superposition), in cGy/MU; lateral profiles at the case's point depths unless given.
+   */
+  dosePlane(
+    raw: unknown,
+    options: DosePlaneOptions = {},
+  ): { ok: true; plane: DosePlane } | { ok: false; problems: { path: string; message: string }[] } {
+    const v = validateCase(raw);
+    if (!v.ok) return v;
+    const c = v.value;
+    const beam = {
+      ssdCm: ssdCmOf(c.beam.setup),
+      fieldXCm: c.beam.fieldXCm,
+      fieldYCm: c.beam.fieldYCm,
+    };
+    const profileDepthsCm = options.profileDepthsCm ?? c.points.map((p) => p.depthCm);
+    return {
+      ok: true,
+      plane: typeBDosePlane(c.beam.energy, makeSlabPhantom(c.layers), beam, {
+        ...options,
+        profileDepthsCm,
+      }),
+    };
   },
   /** Validate a measured TMR/PDD table (and scatter factors): problems, or a summary with plot data. */
   parseWaterTable(

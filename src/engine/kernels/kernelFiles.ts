@@ -1,0 +1,76 @@
+// Shapes of the generated kernel files in src/engine/data/generated/ (written by
+// scripts/generateKernels.ts) and the grids they share.
+import type { BeamEnergy } from '../beam/energies';
+
+export const KERNEL_FORMAT_VERSION = 1;
+export const KERNEL_FORMAT_DATE = '2026-12-01';
+
+interface Provenance {
+  formatVersion: number;
+  formatDate: string;
+  generator: string;
+  seed: number;
+  historiesPerEnergy: number;
+  note: string;
+}
+
+export interface MonoKernelFile extends Provenance {
+  format: 'lamina.pointKernels.mono';
+  monteCarlo: string;
+  radialEdgesCm: number[];
+  polarBins: number;
+  kernels: {
+    energyMeV: number;
+    seed: number;
+    primary: number[];
+    scatter: number[];
+    escapedFraction: number;
+  }[];
+}
+
+export interface BeamKernelFile extends Provenance {
+  format: 'lamina.pointKernels.beams';
+  monoEnergiesMeV: number[];
+  radialEdgesCm: number[];
+  polarBins: number;
+  beams: Partial<
+    Record<
+      BeamEnergy,
+      {
+        weights: number[];
+        primary: number[];
+        scatter: number[];
+        escapedFraction: number;
+        spectrumSource: string;
+      }
+    >
+  >;
+}
+
+export interface PencilKernelFile extends Provenance {
+  format: 'lamina.pencilKernels';
+  monoEnergiesMeV: number[];
+  referenceSsdCm: number;
+  depthsCm: number[];
+  radiiCm: number[];
+  beams: Partial<Record<BeamEnergy, { values: number[] }>>;
+}
+
+function range(from: number, to: number, step: number): number[] {
+  const out: number[] = [];
+  const n = Math.round((to - from) / step);
+  for (let i = 0; i <= n; i++) out.push(Number((from + i * step).toFixed(6)));
+  return out;
+}
+
+/** Pencil-kernel depths: 0.1 cm steps to 6 cm, 0.25 cm to 30 cm, 0.5 cm to 60 cm. */
+export const PENCIL_DEPTHS_CM: number[] = [
+  ...range(0, 6, 0.1),
+  ...range(6.25, 30, 0.25),
+  ...range(30.5, 60, 0.5),
+];
+
+/** Pencil-kernel radii: 0, then a sinh-spaced grid to 60 cm (fine near the axis). */
+export const PENCIL_RADII_CM: number[] = Array.from({ length: 41 }, (_, k) =>
+  Number(((60 * Math.sinh((5 * k) / 40)) / Math.sinh(5)).toFixed(5)),
+);

@@ -1,0 +1,213 @@
+// Rectangle integrals of a laterally symmetric kernel. For a function of the lateral radius with
+// radial cumulative F(S) = ∫₀^S f(s)·2πs ds, the integral over the quadrant rectangle
+// [0, U] × [0, V] is (1/2π)·∫₀^{π/2} F(s_max(φ)) dφ with s_max = min(U/cos φ, V/sin φ)
+// (polar coordinates about the corner at the origin). Any axis-aligned rectangle is then a signed
+// sum of four quadrants.
+import { makeSinhGrid, type SinhGrid } from './sinhGrid';
+import type { CylinderCumulative } from './cylinderCumulative';
+
+// 8-point Gauss–Legendre nodes and weights on [−1, 1] (Abramowitz & Stegun, Table 25.4).
+const GL_X = [
+  -0.9602898564975363, -0.7966664774136267, -0.525532409916329, -0.1834346424956498,
+  0.1834346424956498, 0.525532409916329, 0.7966664774136267, 0.9602898564975363,
+];
+const GL_W = [
+  0.1012285362903763, 0.2223810344533745, 0.3137066458778873, 0.362683783378362, 0.362683783378362,
+  0.3137066458778873, 0.2223810344533745, 0.1012285362903763,
+];
+
+/** Sub-intervals per side of the diagonal, clustered towards the corner direction φ*. */
+const PANELS = 3;
+
+/**
+ * Azimuthal quadrature: (1/2π)·∫₀^{π/2} F(min(U/cos φ, V/sin φ)) dφ, for U, V ≥ 0. Composite
+ * Gauss–Legendre, panels clustered quadratically towards the corner direction φ* = atan(V/U),
+ * where s_max changes fastest (thin rectangles).
+ */
+export function quadrantFromRadial(
+  radialCumulative: (sCm: number) => number,
+  uCm: number,
+  vCm: number,
+): number {
+  if (uCm <= 0 || vCm <= 0) return 0;
+  const split = Math.atan2(vCm, uCm);
+  const rest = 0.5 * Math.PI - split;
+  let sum = 0;
+  for (let p = 0; p < PANELS; p++) {
+    // Panel p covers fractions [f0, f1] of each side's width, measured away from φ*.
+    const f0 = (p / PANELS) ** 2;
+    const f1 = ((p + 1) / PANELS) ** 2;
+    const h1 = 0.5 * (f1 - f0) * split;
+    const h2 = 0.5 * (f1 - f0) * rest;
+    for (let k = 0; k < GL_X.length; k++) {
+      const w = GL_W[k] as number;
+      const x = GL_X[k] as number;
+      const phi1 = split - split * f0 - h1 * (1 + x);
+      sum += w * h1 * radialCumulative(uCm / Math.cos(phi1));
+      const phi2 = split + rest * f0 + h2 * (1 + x);
+      sum += w * h2 * radialCumulative(vCm / Math.sin(phi2));
+    }
+  }
+  return sum / (2 * Math.PI);
+}
+
+/** Signed quadrant integral: sgn(U)·sgn(V)·quadrant(|U|, |V|). */
+export function signedQuadrant(
+  quadrant: (u: number, v: number) => number,
+  uCm: number,
+  vCm: number,
+): number {
+  const s = Math.sign(uCm) * Math.sign(vCm);
+  return s === 0 ? 0 : s * quadrant(Math.abs(uCm), Math.abs(vCm));
+}
+
+/** Integral over the rectangle [u1, u2] × [v1, v2] from a quadrant function. */
+export function rectangleIntegral(
+  quadrant: (u: number, v: number) => number,
+  u1: number,
+  u2: number,
+  v1: number,
+  v2: number,
+): number {
+  return (
+    signedQuadrant(quadrant, u2, v2) -
+    signedQuadrant(quadrant, u1, v2) -
+    signedQuadrant(quadrant, u2, v1) +
+    signedQuadrant(quadrant, u1, v1)
+  );
+}
+
+/**
+ * C(ζ, U, V): energy fraction deposited at axial offsets below ζ over the lateral quadrant
+ * [0, U] × [0, V], tabulated on (ζ of the cylinder table) × sinh lateral grid, index
+ * (iζ · nLat + iU) · nLat + iV.
+ */
+export interface QuadrantTable {
+  zeta: SinhGrid;
+  lateral: SinhGrid;
+  values: Float64Array;
+}
+
+export function quadrantTable(q: CylinderCumulative, lateralSteps = 44): QuadrantTable {
+  const lateral = makeSinhGrid(
+    q.radius.nodes[q.radius.nodes.length - 1] as number,
+    lateralSteps,
+    5,
+  );
+  const nL = lateral.nodes.length;
+  const nZ = q.zeta.nodes.length;
+  const values = new Float64Array(nZ * nL * nL);
+  const nS = q.radius.nodes.length;
+  for (let iz = 0; iz < nZ; iz++) {
+    // ζ is a node of the cylinder table: interpolate in radius only, along its row.
+    const row = q.values.subarray(iz * nS, (iz + 1) * nS);
+    const radial = (s: number): number => {
+      const p = q.radius.position(s);
+      const i = Math.min(Math.floor(p), nS - 2);
+      const t = p - i;
+      return (1 - t) * (row[i] as number) + t * (row[i + 1] as number);
+    };
+    for (let iu = 1; iu < nL; iu++) {
+      for (let iv = 1; iv <= iu; iv++) {
+        const c = quadrantFromRadial(
+          radial,
+          lateral.nodes[iu] as number,
+          lateral.nodes[iv] as number,
+        );
+        values[(iz * nL + iu) * nL + iv] = c;
+        values[(iz * nL + iv) * nL + iu] = c;
+      }
+    }
+  }
+  return { zeta: q.zeta, lateral, values };
+}
+
+/** C(ζ, U, V) for U, V ≥ 0 by trilinear interpolation. */
+export function quadrantAt(t: QuadrantTable, zetaCm: number, uCm: number, vCm: number): number {
+  const nL = t.lateral.nodes.length;
+  const pz = t.zeta.position(zetaCm);
+  const pu = t.lateral.position(uCm);
+  const pv = t.lateral.position(vCm);
+  const iz = Math.min(Math.floor(pz), t.zeta.nodes.length - 2);
+  const iu = Math.min(Math.floor(pu), nL - 2);
+  const iv = Math.min(Math.floor(pv), nL - 2);
+  const tz = pz - iz;
+  const tu = pu - iu;
+  const tv = pv - iv;
+  const v = t.values;
+  let sum = 0;
+  for (let dz = 0; dz < 2; dz++) {
+    const wz = dz === 0 ? 1 - tz : tz;
+    for (let du = 0; du < 2; du++) {
+      const wu = du === 0 ? 1 - tu : tu;
+      const base = ((iz + dz) * nL + iu + du) * nL + iv;
+      sum += wz * wu * ((1 - tv) * (v[base] as number) + tv * (v[base + 1] as number));
+    }
+  }
+  return sum;
+}
+
+/**
+ * C(ζ_hi, U, V) − C(ζ_lo, U, V) for U, V ≥ 0 (one slab of sources over a quadrant), from
+ * fractional grid positions (zeta.position, lateral.position) so callers can reuse them.
+ */
+export function quadrantSlabAtPositions(
+  t: QuadrantTable,
+  zetaHiPosition: number,
+  zetaLoPosition: number,
+  uPosition: number,
+  vPosition: number,
+): number {
+  const nL = t.lateral.nodes.length;
+  const nZ = t.zeta.nodes.length;
+  const iu = Math.min(Math.floor(uPosition), nL - 2);
+  const iv = Math.min(Math.floor(vPosition), nL - 2);
+  const tu = uPosition - iu;
+  const tv = vPosition - iv;
+  const v = t.values;
+  const plane = nL * nL;
+  const o00 = iu * nL + iv;
+  const o10 = o00 + nL;
+  const w00 = (1 - tu) * (1 - tv);
+  const w01 = (1 - tu) * tv;
+  const w10 = tu * (1 - tv);
+  const w11 = tu * tv;
+  let result = 0;
+  for (let k = 0; k < 2; k++) {
+    const pz = k === 0 ? zetaHiPosition : zetaLoPosition;
+    const iz = Math.min(Math.floor(pz), nZ - 2);
+    const tz = pz - iz;
+    const a = iz * plane;
+    const b = a + plane;
+    const lower =
+      w00 * (v[a + o00] as number) +
+      w01 * (v[a + o00 + 1] as number) +
+      w10 * (v[a + o10] as number) +
+      w11 * (v[a + o10 + 1] as number);
+    const upper =
+      w00 * (v[b + o00] as number) +
+      w01 * (v[b + o00 + 1] as number) +
+      w10 * (v[b + o10] as number) +
+      w11 * (v[b + o10 + 1] as number);
+    const value = lower + tz * (upper - lower);
+    result += k === 0 ? value : -value;
+  }
+  return result;
+}
+
+/** C(ζ_hi, U, V) − C(ζ_lo, U, V) for U, V ≥ 0, by trilinear interpolation. */
+export function quadrantSlabAt(
+  t: QuadrantTable,
+  zetaHiCm: number,
+  zetaLoCm: number,
+  uCm: number,
+  vCm: number,
+): number {
+  return quadrantSlabAtPositions(
+    t,
+    t.zeta.position(zetaHiCm),
+    t.zeta.position(zetaLoCm),
+    t.lateral.position(uCm),
+    t.lateral.position(vCm),
+  );
+}
