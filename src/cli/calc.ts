@@ -5,6 +5,7 @@ import { parseArgs } from './args';
 import { runBatch } from './batch';
 import { calculateDocument, jsonOf, loadDocument, planOptionsOf, textOf } from './checkCommand';
 import { WATER_TABLE_USAGE, waterTableFromFlags } from './waterTableArgs';
+import { MC_USAGE, mcOptionsOf } from './mcArgs';
 
 const USAGE = `Usage: npm run calc -- <case.json | plan.json> [--json] [--methods id,id,...]
        npm run calc -- --batch <file> <file> ...   (one summary row per file; exit 1 if any check fails)
@@ -13,7 +14,8 @@ const USAGE = `Usage: npm run calc -- <case.json | plan.json> [--json] [--method
   --methods LIST  comma-separated method ids to compute (default: all available)
   --tolerances H,X  check tolerances in % for homogeneous and heterogeneous paths (default 2,5)
   --check-method ID  method whose verdict decides the check (default: rtmr when available)
-${WATER_TABLE_USAGE}`;
+${WATER_TABLE_USAGE}
+${MC_USAGE}`;
 
 function main(argv: string[]): number {
   let args;
@@ -34,7 +36,11 @@ function main(argv: string[]): number {
   }
   let options;
   try {
-    options = { ...planOptionsOf(args.flags), ...(table ? { waterData: table.waterData } : {}) };
+    options = {
+      ...planOptionsOf(args.flags),
+      ...(table ? { waterData: table.waterData } : {}),
+      ...mcOptionsOf(args.flags),
+    };
   } catch (e) {
     console.error(`${(e as Error).message}\n${USAGE}`);
     return 2;

@@ -14,6 +14,7 @@ import type { Warning } from '../engine/equilibrium';
 import { caseWarnings } from './caseWarnings';
 import type { WaterData } from '../engine/beam/waterData';
 import { isTypeAMethodId, typeAForCase, type TypeAVariants } from './typeAForCase';
+import { MONTE_CARLO_METHOD_ID, monteCarloForCase, type McCalcOptions } from './monteCarloForCase';
 import { isTypeBMethodId, typeBForCase } from './typeBForCase';
 
 export const CALC_FORMAT = 'lamina.calc';
@@ -28,6 +29,8 @@ export interface CalcOptions {
   waterData?: WaterData;
   /** Type-A variants (Batho TAR/TMR, ETAR ρ̃ or weights, dose to medium). */
   typeA?: TypeAVariants;
+  /** Monte Carlo histories and seed; the monte-carlo method runs only when given. */
+  mc?: McCalcOptions;
 }
 
 export interface CalcReport {
@@ -91,10 +94,13 @@ export function calculateCase(c: LaminaCase, options: CalcOptions = {}): CalcRep
   const grid = depthGridCm(phantom.totalThicknessCm, step);
   const requested = options.methods ?? [];
   const typeA = typeAForCase(c, phantom, grid, options.methods, options.waterData, options.typeA);
+  const mc = monteCarloForCase(c, grid, options.methods, options.mc, typeA.waterData);
   const typeB = typeBForCase(c, phantom, grid, options.methods);
   const unavailable = [
     ...typeA.unavailable,
+    ...mc.unavailable,
     ...requested
+      .filter((id) => id !== MONTE_CARLO_METHOD_ID)
       .filter((id) => !isTypeAMethodId(id) && !isTypeBMethodId(id))
       .map((id) => ({ id, reason: 'method not implemented yet' })),
   ];
@@ -134,7 +140,7 @@ export function calculateCase(c: LaminaCase, options: CalcOptions = {}): CalcRep
     })),
     depthCm: grid,
     radiologicalDepthCm: grid.map((d) => radiologicalDepthCm(phantom, d)),
-    methods: [...typeA.methods, ...typeB],
+    methods: [...typeA.methods, ...typeB, ...mc.methods],
     unavailable,
     warnings: caseWarnings(c, phantom, typeA.methods, typeA.waterData),
     cautions: [...CAUTIONS],

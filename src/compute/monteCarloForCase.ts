@@ -1,0 +1,51 @@
+// The Monte Carlo block of a case calculation (single-threaded; the page uses the worker pool in
+// mcPool.ts instead). Runs only when a number of histories is given. With water data, dose per MU
+// uses its reference dose rate and its collimator-scatter factor S_c (the MC models the phantom).
+import { equivalentSquareCm } from '../engine/beam/geometry';
+import type { WaterData } from '../engine/beam/waterData';
+import type { MethodResult } from '../engine/methodResult';
+import { runMonteCarlo } from '../engine/montecarlo/runMonteCarlo';
+import type { LaminaCase } from '../io/caseSchema';
+
+export const MONTE_CARLO_METHOD_ID = 'monte-carlo';
+
+export interface McCalcOptions {
+  histories: number;
+  seed: number;
+}
+
+export function monteCarloForCase(
+  c: LaminaCase,
+  depthCm: readonly number[],
+  requested: readonly string[] | undefined,
+  mc: McCalcOptions | undefined,
+  waterData?: WaterData,
+): { methods: MethodResult[]; unavailable: { id: string; reason: string }[] } {
+  const asked = requested ? requested.includes(MONTE_CARLO_METHOD_ID) : true;
+  if (!asked) return { methods: [], unavailable: [] };
+  if (!mc) {
+    return {
+      methods: [],
+      unavailable: requested
+        ? [{ id: MONTE_CARLO_METHOD_ID, reason: 'needs a number of histories (--mc-histories N)' }]
+        : [],
+    };
+  }
+  const result = runMonteCarlo(
+    c,
+    {
+      histories: mc.histories,
+      seed: mc.seed,
+      ...(waterData
+        ? {
+            referenceDosePerMuCGy: waterData.referenceDosePerMuCGy,
+            collimatorScatterFactor: waterData.sc(
+              equivalentSquareCm(c.beam.fieldXCm, c.beam.fieldYCm),
+            ),
+          }
+        : {}),
+    },
+    depthCm,
+  );
+  return { methods: [result.method], unavailable: [] };
+}
