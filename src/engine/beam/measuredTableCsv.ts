@@ -83,7 +83,13 @@ function numberCell(row: CsvRow, index: number, problems: string[]): number {
     problems.push(`${cellRef(row.row, index + 1)}: "${raw}" is not a number`);
     return NaN;
   }
-  return Number(raw);
+  const value = Number(raw);
+  // "1e999" passes the pattern but reads as Infinity, which no depth, field or factor can be.
+  if (!Number.isFinite(value)) {
+    problems.push(`${cellRef(row.row, index + 1)}: "${raw}" is too large to be a number`);
+    return NaN;
+  }
+  return value;
 }
 
 const SQUARE = /^(\d+\.?\d*|\.\d+)\s*[x×*]\s*(\d+\.?\d*|\.\d+)$/i;
