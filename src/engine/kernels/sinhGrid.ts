@@ -1,6 +1,7 @@
 // A non-uniform grid fine near zero and coarse far out: x_k = L·sinh(α·k/N)/sinh(α), k = 0…N,
-// optionally mirrored to negative values. Its inverse is analytic, so a look-up costs O(1) —
-// which matters in the superposition's inner loops.
+// optionally mirrored to negative values. Its inverse is analytic; for speed in the
+// superposition's inner loops it is read from a fine table of asinh (16 384 intervals, linear
+// between them: error below 1e-3 of a node spacing for the grids used here).
 
 export interface SinhGrid {
   /** Node positions, ascending. */
@@ -24,13 +25,24 @@ export function makeSinhGrid(
   for (let k = 0; k <= steps; k++) half[k] = (lengthCm * Math.sinh((alpha * k) / steps)) / s;
   const scale = s / lengthCm;
   const kOf = steps / alpha;
+  // Fractional index of |x| on [0, L], tabulated: idx(x) = asinh(x·scale)·kOf.
+  const tableSteps = 16384;
+  const perCm = tableSteps / lengthCm;
+  const table = new Float64Array(tableSteps + 2);
+  for (let i = 0; i <= tableSteps + 1; i++)
+    table[i] = Math.asinh(Math.min(i / perCm, lengthCm) * scale) * kOf;
+  const halfPosition = (x: number): number => {
+    if (x >= lengthCm) return steps;
+    const f = x * perCm;
+    const i = Math.floor(f);
+    const a = table[i] as number;
+    return a + (f - i) * ((table[i + 1] as number) - a);
+  };
   if (!mirrored) {
     return {
       nodes: half,
       position(x) {
-        if (x <= 0) return 0;
-        if (x >= lengthCm) return steps;
-        return Math.asinh(x * scale) * kOf;
+        return x <= 0 ? 0 : halfPosition(x);
       },
     };
   }
@@ -42,9 +54,7 @@ export function makeSinhGrid(
   return {
     nodes,
     position(x) {
-      if (x <= -lengthCm) return 0;
-      if (x >= lengthCm) return 2 * steps;
-      return steps + Math.asinh(x * scale) * kOf;
+      return x >= 0 ? steps + halfPosition(x) : steps - halfPosition(-x);
     },
   };
 }

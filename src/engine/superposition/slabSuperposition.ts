@@ -108,6 +108,9 @@ export function superpositionDose(
   const lateral = kernel.lateral;
   const g = new Float64Array(lateral.nodes.length);
   const direct = nx <= 4;
+  let maxAbsLateral = 0;
+  for (let ix = 0; ix < nx; ix++)
+    maxAbsLateral = Math.max(maxAbsLateral, Math.abs(lateralCm[ix] as number));
   // Radiological depth of every cell boundary (cells tile the phantom: bottom c = top c + 1).
   const boundaries = new Float64Array(cells.count + 1);
   boundaries.set(cells.radTopCm);
@@ -153,7 +156,12 @@ export function superpositionDose(
         }
         continue;
       }
-      for (let k = 0; k < g.length; k++) g[k] = quadrantSlabAtPositions(kernel, pHi, pLo, k, pV);
+      // Only the lateral nodes up to the widest offset this row needs.
+      const kMax = Math.min(
+        g.length - 1,
+        Math.ceil(lateral.position(rhoBar * maxAbsLateral + X)) + 1,
+      );
+      for (let k = 0; k <= kMax; k++) g[k] = quadrantSlabAtPositions(kernel, pHi, pLo, k, pV);
       for (let ix = 0; ix < nx; ix++) {
         const u = rhoBar * (lateralCm[ix] as number);
         const sRight = signedNodeInterpolation(kernel, g, u + X);

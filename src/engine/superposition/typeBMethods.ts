@@ -107,9 +107,14 @@ export function typeBDosePlane(
   const depthCm = grid(0, total, step);
   const halfSteps = Math.max(1, Math.ceil(half / step));
   const lateralCm = Array.from({ length: 2 * halfSteps + 1 }, (_, k) => (k - halfSteps) * step);
-  const dose = typeBDosePerMu(method, energy, phantom, beam, depthCm, lateralCm);
+  // The beam and slabs are symmetric about the axis: compute x ≥ 0 and mirror.
+  const right = lateralCm.slice(halfSteps);
+  const nr = right.length;
+  const dose = typeBDosePerMu(method, energy, phantom, beam, depthCm, right);
   const nx = lateralCm.length;
-  const rows = depthCm.map((_, iz) => Array.from(dose.subarray(iz * nx, (iz + 1) * nx)));
+  const rows = depthCm.map((_, iz) =>
+    lateralCm.map((_, ix) => dose[iz * nr + Math.abs(ix - halfSteps)] as number),
+  );
   const profileDepths = (options.profileDepthsCm ?? []).filter((d) => d >= 0 && d <= total);
   const profileDose =
     profileDepths.length > 0
