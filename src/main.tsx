@@ -6,6 +6,7 @@ import { fromCaseFile } from './state/editorCase';
 import { startHistory } from './state/history';
 import { useAppStore } from './state/store';
 import { App } from './ui/App';
+import { openShareLinkFromAddress } from './ui/shareActions';
 import './ui/styles.css';
 
 const restored = loadCaseFromStorage(browserStorage());
@@ -18,3 +19,5 @@ if (root)
       <App />
     </StrictMode>,
   );
+
+void openShareLinkFromAddress();

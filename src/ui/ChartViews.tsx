@@ -9,6 +9,8 @@ import { MethodLegend } from './MethodLegend';
 import { PointTable } from './PointTable';
 import { cfSeries, doseSeries, methodStyles } from './series';
 import { WarningList } from './WarningList';
+import { curvesCsv } from '../io/csvExport';
+import { downloadText } from './download';
 
 const SHORT_LABELS: Record<NormalisationMode, string> = {
   dosePerMu: 'Dose per MU (cGy/MU)',
@@ -54,6 +56,20 @@ export function DoseView({ report, width }: { report: CalcReport; width: number 
         <div className="chart-controls">
           <MethodLegend methods={report.methods} styles={methodStyles(report)} />
           <div className="field">
+            <button
+              type="button"
+              className="export"
+              onClick={() =>
+                downloadText(
+                  `${report.caseName || 'case'}-curves.csv`,
+                  curvesCsv(report),
+                  'text/csv',
+                )
+              }
+              title="Every method's dose per MU and CF at each depth, full precision"
+            >
+              Export curves (CSV)
+            </button>
             <label htmlFor="norm">Normalise dose as</label>
             <select
               id="norm"

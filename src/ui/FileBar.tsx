@@ -5,6 +5,8 @@ import { toCaseFile } from '../state/editorCase';
 import { PRESETS, presetById } from '../state/presets';
 import { redoEdit, replaceCase, undoEdit, useAppStore } from '../state/store';
 import { fileNameFor, openCaseFile } from './caseFileActions';
+import { downloadText } from './download';
+import { copyShareLink } from './shareActions';
 
 function isTextEntry(el: EventTarget | null): boolean {
   return (
@@ -33,14 +35,7 @@ export function FileBar() {
 
   const save = () => {
     const c = toCaseFile(useAppStore.getState().history.present);
-    const url = URL.createObjectURL(new Blob([serializeCase(c)], { type: 'application/json' }));
-    const a = document.createElement('a');
-    a.href = url;
-    a.download = fileNameFor(c.name);
-    document.body.appendChild(a);
-    a.click();
-    a.remove();
-    setTimeout(() => URL.revokeObjectURL(url), 1000);
+    downloadText(fileNameFor(c.name), serializeCase(c), 'application/json');
   };
 
   return (
@@ -84,6 +79,14 @@ export function FileBar() {
       />
       <button type="button" onClick={save} data-testid="save">
         Save
+      </button>
+      <button
+        type="button"
+        onClick={() => void copyShareLink()}
+        data-testid="share"
+        title="Copy a link that carries this case"
+      >
+        Link
       </button>
       <span className="sep" aria-hidden="true" />
       <button

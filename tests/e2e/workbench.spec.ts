@@ -173,3 +173,21 @@ test('a pasted water table with a bad cell is reported by row and column', async
   await expect(page.getByTestId('water-problems')).toContainText('column 3 (C)');
   await expect(page.getByTestId('use-water')).toHaveCount(0);
 });
+
+test('a share link carries the case: opening it restores the layers', async ({ page, context }) => {
+  await context.grantPermissions(['clipboard-read', 'clipboard-write']);
+  await page.getByTestId('preset').selectOption('sinus');
+  await expect(page.getByTestId('layer-2-material')).toHaveValue('air');
+  await page.getByTestId('share').click();
+  await expect(page.getByTestId('file-notice')).toContainText('Link copied');
+  const url = await page.evaluate(() => navigator.clipboard.readText());
+  expect(url).toMatch(/#case=[A-Za-z0-9_-]+$/);
+  await page.evaluate(() => localStorage.clear());
+  await page.goto('/');
+  await page.getByTestId('preset').selectOption('water');
+  await expect(page.getByTestId('layer-2')).toHaveCount(0);
+  await page.goto(url);
+  await page.reload();
+  await expect(page.getByTestId('layer-2-material')).toHaveValue('air');
+  await expect(page.getByTestId('file-notice')).toContainText('from the link');
+});
