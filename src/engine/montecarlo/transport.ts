@@ -173,7 +173,7 @@ export class Transport {
     let tau = -Math.log(rng.next());
     for (;;) {
       const dist = tau / mu;
-      const db = this.geometry.distanceToBoundary(region, x, y, z, u, v, w);
+      const db = Math.max(0, this.geometry.distanceToBoundary(region, x, y, z, u, v, w));
       if (dist < db) {
         x += u * dist;
         y += v * dist;
@@ -310,7 +310,7 @@ export class Transport {
       // Two legs: hinge, deflect, rest. A boundary ends the step early (no deflection after it).
       for (let leg = 0; leg < 2; leg++) {
         const len = leg === 0 ? hinge : step - hinge;
-        const db = this.geometry.distanceToBoundary(region, x, y, z, u, v, w);
+        const db = Math.max(0, this.geometry.distanceToBoundary(region, x, y, z, u, v, w));
         const go = db < len ? db : len;
         const lost = (dE * go) / step;
         const col = lost * fCol;
