@@ -4,13 +4,28 @@ import { createRoot } from 'react-dom/client';
 import { browserStorage, loadCaseFromStorage } from './state/autosave';
 import { fromCaseFile } from './state/editorCase';
 import { startHistory } from './state/history';
+import { readPrefs, writePrefs } from './state/prefs';
 import { useAppStore } from './state/store';
 import { App } from './ui/App';
 import { openShareLinkFromAddress } from './ui/shareActions';
 import './ui/styles.css';
 
-const restored = loadCaseFromStorage(browserStorage());
+const storage = browserStorage();
+const restored = loadCaseFromStorage(storage);
 if (restored) useAppStore.setState({ history: startHistory(fromCaseFile(restored)) });
+useAppStore.setState(readPrefs(storage));
+useAppStore.subscribe((s, prev) => {
+  if (
+    s.theme !== prev.theme ||
+    s.normalisation !== prev.normalisation ||
+    s.hiddenMethods !== prev.hiddenMethods
+  )
+    writePrefs(storage, {
+      theme: s.theme,
+      normalisation: s.normalisation,
+      hiddenMethods: s.hiddenMethods,
+    });
+});
 
 const root = document.getElementById('root');
 if (root)

@@ -80,6 +80,7 @@ export function updateLayer(
   const layers = [...doc.layers];
   const next: EditorLayer = { ...layer, ...patch, key: layer.key };
   if ('densityGPerCm3' in patch && patch.densityGPerCm3 === undefined) delete next.densityGPerCm3;
+  if ('label' in patch && patch.label === undefined) delete next.label;
   layers[index] = next;
   return withLayers(doc, layers);
 }

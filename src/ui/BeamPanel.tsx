@@ -1,6 +1,6 @@
 // Beam set-up: energy, SSD or SAD geometry, field size at 100 cm.
 import { BEAM_ENERGIES, BEAM_ENERGY_LABELS, isBeamEnergy } from '../engine/beam/energies';
-import { editCase, useAppStore } from '../state/store';
+import { editCase, setTab, useAppStore } from '../state/store';
 import type { EditorCase } from '../state/editorCase';
 import { NumberField } from './NumberField';
 import { RULES } from './fieldRules';
@@ -9,6 +9,31 @@ type Beam = EditorCase['beam'];
 
 function setBeam(patch: Partial<Beam>, key: string | null = null) {
   editCase((c) => ({ ...c, beam: { ...c.beam, ...patch } }), key);
+}
+
+function WaterDataLine() {
+  const water = useAppStore((s) => s.history.present.waterData);
+  return (
+    <div className="water-line" data-testid="water-line">
+      <span className="label">Water data</span>{' '}
+      {water ? (
+        <span
+          title={
+            water.scatterFileName
+              ? `scatter factors: ${water.scatterFileName}`
+              : 'no scatter factors'
+          }
+        >
+          measured table {water.fileName}
+        </span>
+      ) : (
+        <span className="missing-text">none (type-A methods cannot run)</span>
+      )}{' '}
+      <button type="button" onClick={() => setTab('water')}>
+        {water ? 'Change…' : 'Load…'}
+      </button>
+    </div>
+  );
 }
 
 export function BeamPanel() {
@@ -114,6 +139,7 @@ export function BeamPanel() {
           onCommit={(v) => setBeam({ fieldYCm: v }, 'beam.fieldYCm')}
         />
       </div>
+      <WaterDataLine />
     </section>
   );
 }

@@ -3,7 +3,7 @@
 import { getMaterial, MATERIAL_IDS, isMaterialId } from '../engine/materials/materialLibrary';
 import { boundariesCm } from '../state/editorCase';
 import { addLayer, moveLayer, removeLayer, splitLayer, updateLayer } from '../state/layerOps';
-import { editCase, useAppStore } from '../state/store';
+import { editCase, endGesture, useAppStore } from '../state/store';
 import { NumberField } from './NumberField';
 import { RULES } from './fieldRules';
 
@@ -31,6 +31,22 @@ export function LayerList() {
             <li key={l.key} className="layer-row" data-testid={`layer-${n}`}>
               <div className="layer-title">
                 <span className="layer-n">{n}</span>
+                <input
+                  type="text"
+                  className="layer-label"
+                  aria-label={`Layer ${n} name`}
+                  placeholder={m.label.replace(/ \(.*\)$/, '')}
+                  maxLength={80}
+                  value={l.label ?? ''}
+                  onChange={(e) => {
+                    const label = e.target.value;
+                    editCase(
+                      (c) => updateLayer(c, i, { label: label === '' ? undefined : label }),
+                      `${l.key}.label`,
+                    );
+                  }}
+                  onBlur={endGesture}
+                />
                 <span className="layer-range">
                   {from.toFixed(1)}–{to.toFixed(1)} cm
                 </span>
