@@ -109,6 +109,33 @@ describe('modelled water data', () => {
   });
 });
 
+describe('modelled water data against the engine it came from', () => {
+  it.each([
+    ['6MV', 10, 10],
+    ['6MV', 6, 5],
+    ['18MV', 15, 20],
+  ] as const)(
+    '%s, isocentre at %i cm, %i cm field (SAD 100): dose per MU = TMR·S_c·S_p·((100 + d_max)/100)²',
+    (energy, depthCm, side) => {
+      // The classic isocentric MU relation (Khan, from memory) with the modelled tables must give
+      // back the superposition's own dose per MU; 0.5 % covers the table interpolation in depth
+      // and field and the slightly different divergence of the two geometries.
+      const w = modelledWaterData(energy);
+      const predicted =
+        w.tmr(depthCm, side) * w.sc(side) * w.sp(side) * ((100 + w.dMaxCm) / 100) ** 2;
+      const engine = typeBDosePerMu(
+        'superposition',
+        energy,
+        waterPhantom(40),
+        { ssdCm: 100 - depthCm, fieldXCm: side, fieldYCm: side },
+        [depthCm],
+        [0],
+      );
+      expectRelClose(engine[0] as number, predicted * w.referenceDosePerMuCGy, 0.005);
+    },
+  );
+});
+
 describe('etarScatterWeights', () => {
   it('sums to 1, and a uniform phantom gives ρ̃ equal to its density', () => {
     const w = etarScatterWeights('6MV', lungSlab, 20, 10);
