@@ -30,6 +30,25 @@ export interface McProgress {
   partial: McResult | null;
 }
 
+/**
+ * Calibration runs (water, 10 × 10, SSD 100) already completed in this session, by energy, seed,
+ * histories and binning. A run is deterministic, so reusing one gives exactly what re-running
+ * it would; a heterogeneous case then simulates two scenarios instead of three.
+ */
+const referenceCache = new Map<string, BatchAccumulator>();
+
+function referenceKey(plan: McPlan): string {
+  const s = plan.scenarios[plan.roles.reference];
+  return JSON.stringify([
+    s,
+    plan.seed,
+    plan.batches,
+    plan.historiesPerBatch,
+    plan.binning,
+    plan.options.transport ?? null,
+  ]);
+}
+
 export class McRunState {
   readonly plan: McPlan;
   private readonly tasks: PlannedTask[];
@@ -45,8 +64,14 @@ export class McRunState {
     private readonly now: () => number = () => Date.now(),
   ) {
     this.plan = planMonteCarlo(c, options);
-    this.tasks = batchTasksOf(this.plan);
     this.accumulators = accumulatorsOf(this.plan);
+    const { roles } = this.plan;
+    const ownReference = roles.reference !== roles.case && roles.reference !== roles.water;
+    const cached = ownReference ? referenceCache.get(referenceKey(this.plan)) : undefined;
+    if (cached) this.accumulators[roles.reference] = cached;
+    this.tasks = batchTasksOf(this.plan).filter(
+      (t) => !cached || t.scenarioIndex !== roles.reference,
+    );
     this.startedMs = now();
   }
 
@@ -60,6 +85,8 @@ export class McRunState {
     if (!acc) throw new RangeError(`no scenario ${scenarioIndex}`);
     acc.add(tally);
     this.doneCount++;
+    if (scenarioIndex === this.plan.roles.reference && acc.completed === this.plan.batches)
+      referenceCache.set(referenceKey(this.plan), acc);
   }
 
   get finished(): boolean {

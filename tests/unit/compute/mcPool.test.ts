@@ -106,6 +106,21 @@ describe('startMonteCarlo', () => {
     await expect(run.done).rejects.toThrow(/cancelled/);
   });
 
+  it('McRunState reuses a finished calibration run: a second run simulates 2 of 3 scenarios and gives the same result', () => {
+    const options = { histories: 1000, seed: 321, batches: 10 };
+    const drive = (state: McRunState) => {
+      for (let t = state.nextTask(); t; t = state.nextTask())
+        state.accept(t.scenarioIndex, runBatch(t.task));
+      return state;
+    };
+    const first = drive(new McRunState(CASE, options, GRID));
+    const second = drive(new McRunState(CASE, options, GRID));
+    expect(first.plan.scenarios).toHaveLength(3);
+    expect(first.progress(false).totalTasks).toBe(30);
+    expect(second.progress(false).totalTasks).toBe(20);
+    expect(second.result().method).toEqual(first.result().method);
+  });
+
   it('McRunState.progress() has no estimate until every scenario has two batches', () => {
     const s = new McRunState(CASE, OPTIONS, GRID);
     expect(s.progress().partial).toBeNull();

@@ -1,0 +1,49 @@
+import { describe, expect, it } from 'vitest';
+import { runMonteCarlo } from '../../../src/engine/montecarlo/runMonteCarlo';
+import { lateralProfileAtDepth } from '../../../src/engine/montecarlo/planeProfile';
+import { collisionStoppingPowerMeVCm2PerG } from '../../../src/engine/materials/electronStopping';
+import { makeSpectrumSampler } from '../../../src/engine/montecarlo/spectrumSampler';
+import type { McCaseInput } from '../../../src/engine/montecarlo/monteCarloPlan';
+import { expectRelClose } from '../../helpers/expectClose';
+
+const CASE: McCaseInput = {
+  beam: { energy: '6MV', setup: { kind: 'SSD', ssdCm: 100 }, fieldXCm: 10, fieldYCm: 6 },
+  layers: [
+    { materialId: 'water', thicknessCm: 3 },
+    { materialId: 'corticalBone', thicknessCm: 2 },
+    { materialId: 'water', thicknessCm: 5 },
+  ],
+  points: [],
+};
+const GRID = [1, 4, 8];
+
+describe('Monte Carlo result extras', () => {
+  it('doseToWater converts bone dose by the water/bone stopping-power ratio and leaves water alone', () => {
+    const medium = runMonteCarlo(CASE, { histories: 2000, seed: 9 }, GRID);
+    const water = runMonteCarlo(CASE, { histories: 2000, seed: 9, doseToWater: true }, GRID);
+    // Same seed, same histories: only the conversion differs. ESTAR ratio at one third of the
+    // mean photon energy (Siebers et al. 2000 form with one representative electron energy).
+    const t = makeSpectrumSampler('6MV').meanEnergyMeV / 3;
+    const spr =
+      collisionStoppingPowerMeVCm2PerG('water', t) /
+      collisionStoppingPowerMeVCm2PerG('corticalBone', t);
+    const m = medium.depthDose.case.dosePerFluenceGyCm2;
+    const w = water.depthDose.case.dosePerFluenceGyCm2;
+    // Bin 16 (4.0–4.25 cm) is bone, bin 4 (1.0–1.25 cm) water.
+    expectRelClose(w[16]! / m[16]!, spr, 1e-12);
+    expect(w[4]! / m[4]!).toBe(1);
+    expect(spr).toBeGreaterThan(1.05);
+    expect(water.method.variant).toMatch(/dose to water/);
+  });
+
+  it('lateralProfileAtDepth(...) is flat in the field centre and falls outside the field', () => {
+    const r = runMonteCarlo(CASE, { histories: 4000, seed: 2 }, GRID);
+    const p = lateralProfileAtDepth(r.plane, 8);
+    expect(p.binDepthCm).toBeCloseTo(7.875, 9);
+    const at = (x: number) => p.dosePerMuCGy[p.xCm.indexOf(x)]!;
+    // Field 10 cm wide at 100 cm → 10.8 cm at 8 cm depth: ±2 cm is inside, ±8 cm well outside.
+    expect(at(8)).toBeLessThan(0.2 * at(0));
+    expect(at(-8)).toBeLessThan(0.2 * at(0));
+    expect(Math.abs(at(2) - at(-2)) / at(0)).toBeLessThan(0.15);
+  });
+});
