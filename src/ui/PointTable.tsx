@@ -49,7 +49,8 @@ export function PointTable({ report }: { report: CalcReport }) {
             </th>
             {report.points.map((p) => (
               <th scope="colgroup" colSpan={2} key={p.id} className="group-start">
-                {p.id}{' '}
+                {p.id}
+                <br />
                 <span className="hint">
                   {p.depthCm.toFixed(2)} cm (radiological {p.radiologicalDepthCm.toFixed(2)} cm)
                 </span>

@@ -191,3 +191,58 @@ test('a share link carries the case: opening it restores the layers', async ({ p
   await expect(page.getByTestId('layer-2-material')).toHaveValue('air');
   await expect(page.getByTestId('file-notice')).toContainText('from the link');
 });
+
+test('at 1280×720 every view fits the width, labels do not overlap and no NaN shows', async ({
+  page,
+}, testInfo) => {
+  await page.setViewportSize({ width: 1280, height: 720 });
+  await page.getByTestId('quick-demo-water').click();
+  await expect(page.getByTestId('dose-chart')).toBeVisible();
+  // A click on the depth ruler places a new point of interest.
+  const ruler = (await page.getByTestId('depth-ruler').boundingBox())!;
+  await page.mouse.click(ruler.x + ruler.width * 0.25, ruler.y + ruler.height / 2);
+  await expect(page.getByTestId('point-P2-depth')).toHaveValue('5');
+  for (const tab of [
+    'Depth dose',
+    'Correction factors',
+    'Water data',
+    'Dose plane',
+    'Monte Carlo run',
+  ]) {
+    await page.getByRole('tab', { name: tab }).click();
+    await page.waitForTimeout(300);
+    const overflow = await page.evaluate(
+      () => document.documentElement.scrollWidth - window.innerWidth,
+    );
+    expect(overflow, `${tab}: page wider than the window`).toBeLessThanOrEqual(0);
+    const overlaps = await page.evaluate(() => {
+      const found: string[] = [];
+      for (const svg of Array.from(document.querySelectorAll('svg'))) {
+        const boxes = Array.from(svg.querySelectorAll('text.tick-label, text.slab-label')).map(
+          (t) => ({
+            text: t.textContent ?? '',
+            r: t.getBoundingClientRect(),
+          }),
+        );
+        for (let i = 0; i < boxes.length; i++)
+          for (let j = i + 1; j < boxes.length; j++) {
+            const a = boxes[i]!.r;
+            const b = boxes[j]!.r;
+            if (
+              a.left < b.right - 1 &&
+              b.left < a.right - 1 &&
+              a.top < b.bottom - 1 &&
+              b.top < a.bottom - 1
+            )
+              found.push(`${boxes[i]!.text} / ${boxes[j]!.text}`);
+          }
+      }
+      return found;
+    });
+    expect(overlaps, `${tab}: overlapping labels`).toEqual([]);
+    await page.screenshot({
+      path: testInfo.outputPath(`1280-${tab.split(' ')[0]!.toLowerCase()}.png`),
+    });
+    await expectNoNaN(page);
+  }
+});
