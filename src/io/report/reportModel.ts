@@ -170,8 +170,10 @@ export function buildReportModel(input: ReportInput): ReportModel {
   blocks.push({ kind: 'paragraph', text: checkSummary(check) });
   blocks.push({ kind: 'heading', text: 'Point check per beam' });
   blocks.push({ kind: 'table', headers: POINT_TABLE_HEADERS, rows: pointTableRows(check) });
-  blocks.push({ kind: 'heading', text: 'Total at each point (sum over beams)' });
-  blocks.push({ kind: 'table', headers: TOTAL_TABLE_HEADERS, rows: totalTableRows(check) });
+  if (check.beams.length > 1) {
+    blocks.push({ kind: 'heading', text: 'Total at each point (sum over beams)' });
+    blocks.push({ kind: 'table', headers: TOTAL_TABLE_HEADERS, rows: totalTableRows(check) });
+  }
   for (const b of result.beams)
     blocks.push(...beamBlocks(b.id, plan, b.report, input.waterChains?.[b.id] ?? b.waterChains));
   blocks.push({ kind: 'heading', text: 'Cautions' });

@@ -109,7 +109,7 @@ function writeTable(doc: JsPdf, c: Cursor, block: Extract<ReportBlock, { kind: '
 
 function writeFigure(doc: JsPdf, c: Cursor, fig: ReportFigure): void {
   const h = 70;
-  const legendRows = Math.ceil(fig.series.length / 3);
+  const legendRows = Math.ceil(fig.series.length / 2);
   ensureRoom(doc, c, h + 14 + legendRows * 4);
   writeLines(doc, c, fig.title, 8, 'bold');
   const box = { x: PAGE.margin + 14, y: c.y + 2, w: CONTENT_WIDTH - 18, h: h - 12 };
@@ -143,8 +143,8 @@ function writeFigure(doc: JsPdf, c: Cursor, fig: ReportFigure): void {
         const z = run[k] as [number, number];
         doc.line(px(a[0]), py(a[1]), px(z[0]), py(z[1]));
       }
-    const lx = box.x + (i % 3) * (box.w / 3);
-    const ly = box.y + box.h + 11 + Math.floor(i / 3) * 4;
+    const lx = box.x + (i % 2) * (box.w / 2);
+    const ly = box.y + box.h + 11 + Math.floor(i / 2) * 4;
     doc.line(lx, ly - 0.8, lx + 6, ly - 0.8);
     doc.setFontSize(6.5);
     doc.text(pdfText(s.label), lx + 7.5, ly);

@@ -1,0 +1,93 @@
+// The check's results: a verdict banner, the per-beam table (every method at every point) and
+// the totals over beams. Verdicts are words as well as colours.
+import type { PlanCheck } from '../../engine/check/planCheck';
+import type { Verdict } from '../../engine/check/tolerance';
+import { VERDICT_TEXT } from '../../io/report/reportModel';
+import {
+  pointTableRows,
+  POINT_TABLE_HEADERS,
+  totalTableRows,
+  TOTAL_TABLE_HEADERS,
+} from '../../io/report/reportTables';
+
+function VerdictCell({ v }: { v: string }) {
+  return (
+    <td className={`verdict verdict-${v}`}>{v === 'fail' ? 'FAIL' : v === 'pass' ? 'pass' : v}</td>
+  );
+}
+
+function RowsTable({
+  caption,
+  headers,
+  rows,
+  testId,
+}: {
+  caption: string;
+  headers: string[];
+  rows: string[][];
+  testId: string;
+}) {
+  const last = headers.length - 1;
+  return (
+    <div className="table-wrap">
+      <table className="check-table results" data-testid={testId}>
+        <caption>{caption}</caption>
+        <thead>
+          <tr>
+            {headers.map((h) => (
+              <th key={h} scope="col">
+                {h}
+              </th>
+            ))}
+          </tr>
+        </thead>
+        <tbody>
+          {rows.map((r, i) => (
+            <tr key={i}>
+              {r.map((c, k) => (k === last ? <VerdictCell key={k} v={c} /> : <td key={k}>{c}</td>))}
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}
+
+export function VerdictBanner({ check }: { check: PlanCheck }) {
+  const m = check.methods.find((x) => x.id === check.decisiveMethodId);
+  const v: Verdict = check.verdict;
+  return (
+    <p className={`check-verdict verdict-${v}`} role="status" data-testid="check-verdict">
+      <strong>
+        {v === 'pass' ? 'Within tolerance' : v === 'fail' ? 'Outside tolerance' : 'Not compared'}
+      </strong>
+      {' — '}
+      {m ? `decided by ${m.label}` : 'no method computed'}; {VERDICT_TEXT[v]}.
+    </p>
+  );
+}
+
+export function CheckResults({ check }: { check: PlanCheck }) {
+  if (check.methods.length === 0)
+    return (
+      <p className="empty">No dose method has a result yet (type-A methods need water data).</p>
+    );
+  return (
+    <>
+      <RowsTable
+        caption="Per beam: dose per MU, MU for the dose, and differences from the planning system"
+        headers={POINT_TABLE_HEADERS}
+        rows={pointTableRows(check)}
+        testId="check-point-table"
+      />
+      {check.beams.length > 1 ? (
+        <RowsTable
+          caption="Total at each point (sum over beams, planning MU × dose per MU)"
+          headers={TOTAL_TABLE_HEADERS}
+          rows={totalTableRows(check)}
+          testId="check-total-table"
+        />
+      ) : null}
+    </>
+  );
+}

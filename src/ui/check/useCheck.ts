@@ -1,0 +1,118 @@
+// Everything the check panel shows, derived from the editor's case and its latest calculation
+// plus the check inputs: the plan, the point check, and (on demand) the printable record.
+import { useEffect, useMemo } from 'react';
+import type { CalcReport } from '../../compute/calculateCase';
+import { checkInputOf, waterChainsOf, type PlanReport } from '../../compute/calculatePlan';
+import { getComputeWorker } from '../../compute/computeClient';
+import { checkPlan, type PlanCheck } from '../../engine/check/planCheck';
+import type { LaminaCase } from '../../io/caseSchema';
+import { PLAN_FORMAT, PLAN_VERSION } from '../../io/planSchema';
+import type { LaminaPlan } from '../../io/planFile';
+import { toCaseFile } from '../../state/editorCase';
+import { useAppStore } from '../../state/store';
+import { patchExtraBeam, useCheckStore, type CheckState } from './checkStore';
+
+export interface CheckView {
+  plan: LaminaPlan;
+  /** Calculated beams (beams still calculating are left out). */
+  reports: { id: string; label: string; weight: number; case: LaminaCase; report: CalcReport }[];
+  pending: string[];
+  check: PlanCheck;
+}
+
+export function planOf(first: LaminaCase, s: CheckState): LaminaPlan {
+  const plan: LaminaPlan = {
+    format: PLAN_FORMAT,
+    version: PLAN_VERSION,
+    name: s.planName || first.name,
+    beams: [
+      {
+        id: s.firstBeam.id,
+        label: s.firstBeam.label || undefined,
+        weight: s.firstBeam.weight,
+        case: first,
+      },
+      ...s.extraBeams.map((b) => ({
+        id: b.id,
+        label: b.label || undefined,
+        weight: b.weight,
+        case: b.case,
+      })),
+    ],
+    tolerances: { ...s.tolerances },
+  };
+  if (s.prescriptionDoseCGy !== null && s.prescriptionPointId)
+    plan.prescription = { pointId: s.prescriptionPointId, doseCGy: s.prescriptionDoseCGy };
+  if (s.checkMethodId) plan.checkMethodId = s.checkMethodId;
+  return plan;
+}
+
+/** Keep every extra beam calculated (in the compute worker) whenever its case changes. */
+export function useExtraBeamCalculations(): void {
+  const extra = useCheckStore((s) => s.extraBeams);
+  useEffect(() => {
+    for (const b of extra) {
+      if (b.report || b.problems.length > 0) continue;
+      const target = b.case;
+      void getComputeWorker()
+        .calculate(target, {})
+        .then((r) => {
+          const now = useCheckStore.getState().extraBeams.find((x) => x.key === b.key);
+          if (!now || now.case !== target) return; // edited or removed meanwhile
+          if (r.ok) patchExtraBeam(b.key, { report: r.report, problems: [] });
+          else patchExtraBeam(b.key, { problems: r.problems });
+        });
+    }
+  }, [extra]);
+}
+
+export function useCheckView(): CheckView | null {
+  const present = useAppStore((s) => s.history.present);
+  const report = useAppStore((s) => s.calc.report);
+  const s = useCheckStore();
+  return useMemo(() => {
+    if (!report) return null;
+    const first = toCaseFile(present);
+    const plan = planOf(first, s);
+    const reports: CheckView['reports'] = [];
+    const pending: string[] = [];
+    plan.beams.forEach((b, i) => {
+      const r = i === 0 ? report : (s.extraBeams[i - 1]?.report ?? null);
+      if (r)
+        reports.push({
+          id: b.id,
+          label: b.label ?? b.case.name,
+          weight: b.weight,
+          case: b.case,
+          report: r,
+        });
+      else pending.push(b.id);
+    });
+    const check = checkPlan(
+      reports.map((b) => checkInputOf(b, b.case, b.report)),
+      {
+        tolerances: s.tolerances,
+        prescription: plan.prescription,
+        decisiveMethodId: s.checkMethodId || undefined,
+      },
+    );
+    return { plan, reports, pending, check };
+  }, [present, report, s]);
+}
+
+/** The plan report the record is built from (water factor chains computed here, on demand). */
+export function planReportOf(view: CheckView): PlanReport {
+  return {
+    format: 'lamina.plancalc',
+    version: 1,
+    planName: view.plan.name,
+    beams: view.reports.map((b) => ({
+      id: b.id,
+      label: b.label,
+      weight: b.weight,
+      report: b.report,
+      waterChains: waterChainsOf(b.case, {}),
+    })),
+    check: view.check,
+  };
+}

@@ -1,0 +1,123 @@
+// The point check as a user takes it: planning values in, verdicts out, print view, PDF record,
+// a two-beam plan opened from a file and passed on through a link.
+import { expect, test, type Page } from '@playwright/test';
+import { readFileSync } from 'node:fs';
+
+test.beforeEach(async ({ page }) => {
+  await page.goto('/');
+  await page.evaluate(() => localStorage.clear());
+  await page.reload();
+});
+
+async function openCheckWithWaterData(page: Page) {
+  await page.getByTestId('quick-demo-water').click();
+  await expect(page.getByTestId('calc-status')).toContainText('calculated in');
+  await page.getByRole('tab', { name: 'Point check & report' }).click();
+  await expect(page.getByTestId('check-panel')).toBeVisible();
+  await expect(page.getByTestId('check-point-table')).toBeVisible();
+}
+
+/** The cells of the per-beam row for a point and method label. */
+async function rowCells(page: Page, pointId: string, methodLabel: string): Promise<string[]> {
+  const rows = page.getByTestId('check-point-table').locator('tbody tr');
+  const all = await rows.evaluateAll((trs) =>
+    trs.map((tr) => Array.from(tr.querySelectorAll('td')).map((td) => td.textContent ?? '')),
+  );
+  const row = all.find((cells) => cells[1] === pointId && cells[3] === methodLabel);
+  if (!row) throw new Error(`no row for ${pointId} / ${methodLabel}`);
+  return row;
+}
+
+test('entering the planning dose and MU gives a verdict; print view and PDF record', async ({
+  page,
+}, testInfo) => {
+  await openCheckWithWaterData(page);
+  await expect(page.getByTestId('check-verdict')).toContainText('Not compared');
+
+  // Planning dose 200 cGy at P1: the check gives the MU for it (column "check MU").
+  await page.getByTestId('plan-dose-beam-1-P1').fill('200');
+  const rtmr = 'Ratio of TMR (effective depth)';
+  const checkMu = Number((await rowCells(page, 'P1', rtmr))[5]);
+  expect(checkMu).toBeGreaterThan(100);
+
+  // The planning system's MU 1 % above the check: within the 5 % heterogeneous tolerance.
+  await page.getByTestId('plan-mu-beam-1-P1').fill((checkMu * 1.01).toFixed(1));
+  await expect(page.getByTestId('check-verdict')).toContainText('Within tolerance');
+  expect((await rowCells(page, 'P1', rtmr))[12]).toBe('pass');
+
+  // 10 % above: outside tolerance, shown in words.
+  await page.getByTestId('plan-mu-beam-1-P1').fill((checkMu * 1.1).toFixed(1));
+  await expect(page.getByTestId('check-verdict')).toContainText('Outside tolerance');
+  expect((await rowCells(page, 'P1', rtmr))[12]).toBe('FAIL');
+
+  // A wider tolerance turns it back to a pass.
+  await page.getByTestId('tol-heterogeneous').fill('12');
+  await expect(page.getByTestId('check-verdict')).toContainText('Within tolerance');
+  await page.screenshot({ path: testInfo.outputPath('check-panel.png'), fullPage: true });
+
+  // Print: only the record is shown, with the point table and the signature line.
+  await page.emulateMedia({ media: 'print' });
+  await expect(page.getByTestId('check-record')).toBeVisible();
+  await expect(page.getByTestId('check-panel')).toBeHidden();
+  await expect(page.getByTestId('check-record')).toContainText('Point check per beam');
+  await expect(page.getByTestId('check-record')).toContainText('Checked by');
+  await page.screenshot({ path: testInfo.outputPath('check-print.png'), fullPage: true });
+  await page.emulateMedia({ media: 'screen' });
+  await expect(page.getByTestId('check-record')).toBeHidden();
+
+  // PDF record: ISO-dated name, PDF bytes, the point table inside.
+  const [download] = await Promise.all([
+    page.waitForEvent('download'),
+    page.getByRole('button', { name: 'Download PDF' }).click(),
+  ]);
+  expect(download.suggestedFilename()).toMatch(/^lamina-check-\d{4}-\d{2}-\d{2}\.pdf$/);
+  const pdf = readFileSync(await download.path()).toString('latin1');
+  expect(pdf.startsWith('%PDF-')).toBe(true);
+  expect(pdf).toContain('(Point check per beam) Tj');
+  expect(pdf).toContain(`(${(checkMu * 1.1).toFixed(1)}) Tj`);
+});
+
+test('a two-beam plan opened from a file shows the total, and travels through a link', async ({
+  page,
+}, testInfo) => {
+  await page.getByRole('tab', { name: 'Point check & report' }).click();
+  await page
+    .getByTestId('check-open-plan')
+    .setInputFiles('public/cases/opposed-pair-chest-6mv.plan.json');
+  await expect(page.getByTestId('check-total-table')).toBeVisible();
+  await expect(page.getByTestId('check-verdict')).toContainText('Within tolerance');
+  const totals = await page
+    .getByTestId('check-total-table')
+    .locator('tbody tr')
+    .first()
+    .innerText();
+  expect(totals).toMatch(/iso/);
+  await page.screenshot({ path: testInfo.outputPath('check-plan.png'), fullPage: true });
+
+  // CSV of the point check parses back with one row per beam and method.
+  const [csv] = await Promise.all([
+    page.waitForEvent('download'),
+    page.getByRole('button', { name: 'CSV: point check' }).click(),
+  ]);
+  const lines = readFileSync(await csv.path(), 'utf8')
+    .trim()
+    .split(/\r?\n/);
+  expect(lines[0]).toMatch(/^beam,point,depth_cm,method/);
+  expect(lines.filter((l) => l.startsWith('AP,')).length).toBeGreaterThan(3);
+
+  await page.getByRole('button', { name: 'Copy share link' }).click();
+  const link = await page.getByTestId('share-link').inputValue();
+  expect(link).toMatch(/#plan=[A-Za-z0-9_-]+$/);
+
+  await page.goto('/');
+  await page.evaluate(() => localStorage.clear());
+  await page.goto(link);
+  await page.getByRole('tab', { name: 'Point check & report' }).click();
+  await expect(page.getByTestId('check-total-table')).toBeVisible();
+  await expect(page.getByTestId('check-beams')).toContainText('PA');
+  const doc = JSON.parse(readFileSync('public/cases/opposed-pair-chest-6mv.plan.json', 'utf8')) as {
+    name: string;
+  };
+  await expect(page.getByTestId('check-record')).toHaveCount(1);
+  await expect(page.locator('body')).toContainText(doc.name.slice(0, 20));
+});
