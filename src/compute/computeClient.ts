@@ -1,25 +1,23 @@
-// The page's handle on the compute worker. One worker, created on first use, replaced if it dies.
-import * as Comlink from 'comlink';
+// The page's handle on the compute worker. One worker, created on first use; if it throws or
+// dies, waiting calls reject with a WorkerLostError and the next call starts a fresh one.
+import type * as Comlink from 'comlink';
 import type { ComputeApi } from './computeApi';
+import { superviseWorker } from './workerSupervisor';
 
-let worker: Worker | undefined;
-let remote: Comlink.Remote<ComputeApi> | undefined;
-
-export function getComputeWorker(): Comlink.Remote<ComputeApi> {
-  if (!remote) {
-    worker = new Worker(new URL('../../workers/compute.worker.ts', import.meta.url), {
+export const computeWorker = superviseWorker<ComputeApi>(
+  () =>
+    new Worker(new URL('../../workers/compute.worker.ts', import.meta.url), {
       type: 'module',
       name: 'lamina-compute',
-    });
-    remote = Comlink.wrap<ComputeApi>(worker);
-  }
-  return remote;
+    }),
+  'compute',
+);
+
+export function getComputeWorker(): Comlink.Remote<ComputeApi> {
+  return computeWorker.api();
 }
 
 /** Terminate the worker (e.g. after a crash or to cancel); the next call starts a fresh one. */
 export function resetComputeWorker(): void {
-  remote?.[Comlink.releaseProxy]();
-  worker?.terminate();
-  worker = undefined;
-  remote = undefined;
+  computeWorker.terminate();
 }

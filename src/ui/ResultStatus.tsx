@@ -3,6 +3,7 @@
 import { NEEDS_WATER_DATA } from '../compute/typeAForCase';
 import { setTab, useAppStore } from '../state/store';
 import { loadDemoTables } from './demoTables';
+import { RetryButton } from './RetryButton';
 
 export function ResultStatus() {
   const calc = useAppStore((s) => s.calc);
@@ -24,7 +25,7 @@ export function ResultStatus() {
       ) : null}
       {calc.status === 'error' ? (
         <div className="notice error" role="alert">
-          The calculation failed: {calc.error}
+          The calculation failed: {calc.error} <RetryButton />
         </div>
       ) : null}
       {r && r.methods.length === 0 ? (

@@ -2,6 +2,8 @@
 // report; only the newest answer is shown (older ones are dropped, waiting ones replaced).
 import { useEffect } from 'react';
 import { getComputeWorker } from '../compute/computeClient';
+import { installDebugHooks } from '../compute/debugHooks';
+import { onRecalcRequest } from '../state/recalc';
 import { toCaseFile } from '../state/editorCase';
 import { makeLatestOnly } from '../state/latestOnly';
 import { setCalc, useAppStore } from '../state/store';
@@ -20,7 +22,12 @@ export function useCompute(): void {
         started.delete(id);
         const elapsedMs = t0 === undefined ? null : performance.now() - t0;
         if (!result.ok) {
-          setCalc({ status: 'error', error: String(result.error), elapsedMs });
+          const e = result.error;
+          setCalc({
+            status: 'error',
+            error: e instanceof Error ? e.message : String(e),
+            elapsedMs,
+          });
           return;
         }
         const r = result.value;
@@ -39,7 +46,13 @@ export function useCompute(): void {
     const unsubscribe = useAppStore.subscribe((s, prev) => {
       if (s.history.present !== prev.history.present) runner.request(toCaseFile(s.history.present));
     });
+    // Retry after a failed calculation (e.g. the worker was lost): the same case again.
+    const stopRetry = onRecalcRequest(() =>
+      runner.request(toCaseFile(useAppStore.getState().history.present)),
+    );
+    installDebugHooks();
     return () => {
+      stopRetry();
       unsubscribe();
       runner.cancel();
     };
