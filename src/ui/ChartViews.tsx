@@ -9,6 +9,7 @@ import { MethodLegend } from './MethodLegend';
 import { PointTable } from './PointTable';
 import { cfSeries, doseSeries, methodStyles } from './series';
 import { WarningList } from './WarningList';
+import { nearestIndex } from '../plots/curveLayout';
 import { curvesCsv } from '../io/csvExport';
 import { downloadText } from './download';
 
@@ -20,6 +21,17 @@ const SHORT_LABELS: Record<NormalisationMode, string> = {
 
 function interfacesOf(report: CalcReport): number[] {
   return report.layers.slice(0, -1).map((l) => l.bottomCm);
+}
+
+/** "lung, radiological 4.42 cm" for the readout. */
+function depthDescriber(report: CalcReport): (depthCm: number) => string {
+  return (depthCm) => {
+    const layer = report.layers.find((l) => depthCm <= l.bottomCm + 1e-9) ?? report.layers.at(-1);
+    const i = nearestIndex(report.depthCm, depthCm);
+    const rad = report.radiologicalDepthCm[i];
+    const name = layer ? layer.material.replace(/ \(.*\)$/, '') : '';
+    return rad === undefined ? name : `${name}, radiological ${rad.toFixed(2)} cm`;
+  };
 }
 
 function maxDepthOf(report: CalcReport): number {
@@ -100,6 +112,7 @@ export function DoseView({ report, width }: { report: CalcReport; width: number 
           bands={bands}
           points={report.points}
           digits={mode === 'percentWaterDmax' ? 1 : 3}
+          describeDepth={depthDescriber(report)}
           yInclude={mode === 'relativeToWater' ? [1] : [0]}
         />
       ) : null}
@@ -135,6 +148,7 @@ export function CfView({ report, width }: { report: CalcReport; width: number })
             points={report.points}
             digits={3}
             yInclude={[1]}
+            describeDepth={depthDescriber(report)}
           />
           <PointTable report={report} />
         </>

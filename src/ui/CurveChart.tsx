@@ -9,6 +9,7 @@ import {
   type DepthBand,
 } from '../plots/curveLayout';
 import { SIDE_MARGIN } from './frame';
+import { labelRows } from '../plots/labelRows';
 
 export interface CurveChartProps {
   title: string;
@@ -26,6 +27,8 @@ export interface CurveChartProps {
   testId?: string;
   /** Depth-axis title; the beam-axis depth when absent. */
   xLabel?: string;
+  /** Extra words about a depth for the readout (layer, radiological depth). */
+  describeDepth?: (depthCm: number) => string;
   /** Draw a legend under the chart (for charts without the method legend). */
   legend?: boolean;
 }
@@ -140,17 +143,18 @@ export function CurveChart(props: CurveChartProps) {
             data-method={c.id}
           />
         ))}
-        {(props.points ?? []).map((p) => {
-          const x = layout.x(Math.min(p.depthCm, props.maxDepthCm));
-          return (
-            <g key={p.id} className="poi">
-              <line x1={x} x2={x} y1={plot.top} y2={bottom} />
-              <text x={x + 3} y={plot.top + 10} className="poi-label">
-                {p.id}
-              </text>
-            </g>
-          );
-        })}
+        {labelRows(
+          props.points ?? [],
+          (p) => layout.x(Math.min(p.depthCm, props.maxDepthCm)),
+          (p) => p.id,
+        ).map(({ item: p, x, row }) => (
+          <g key={p.id} className="poi">
+            <line x1={x} x2={x} y1={plot.top} y2={bottom} />
+            <text x={x + 3} y={plot.top + 10 + 12 * row} className="poi-label">
+              {p.id}
+            </text>
+          </g>
+        ))}
         {hx !== null ? (
           <line x1={hx} x2={hx} y1={plot.top} y2={bottom} className="crosshair" />
         ) : null}
@@ -202,7 +206,9 @@ export function CurveChart(props: CurveChartProps) {
             hx > plot.left + plot.width / 2 ? { right: props.width - hx + 10 } : { left: hx + 10 }
           }
         >
-          <div className="readout-depth">depth {hz.toFixed(2)} cm</div>
+          <div className="readout-depth">
+            depth {hz.toFixed(2)} cm{props.describeDepth ? ` · ${props.describeDepth(hz)}` : ''}
+          </div>
           {props.series.map((s) => {
             const v = s.values[hover];
             const sd = s.sigma?.[hover];
