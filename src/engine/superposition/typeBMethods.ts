@@ -2,8 +2,8 @@
 // geometry filled with water) and the x–z dose plane with lateral profiles for the page.
 import type { BeamEnergy } from '../beam/energies';
 import type { MethodResult } from '../methodResult';
-import { waterPhantom, type SlabPhantom } from '../phantom/slabPhantom';
-import { KERNEL_FORMAT_DATE_OF_DATA } from './beamModel';
+import { radiologicalDepthCm, waterPhantom, type SlabPhantom } from '../phantom/slabPhantom';
+import { KERNEL_FORMAT_DATE_OF_DATA, typeBModel } from './beamModel';
 import { typeBDosePerMu, referencePoint, type TypeBEngine } from './typeBDose';
 import type { SlabBeam } from './slabSuperposition';
 
@@ -30,6 +30,17 @@ const VARIANTS: Record<TypeBEngine, string> = {
 /** The water-data string printed with type-B results. */
 export function modelledBeamSource(energy: BeamEnergy): string {
   return `modelled beam (${energy}, generated ${KERNEL_FORMAT_DATE_OF_DATA})`;
+}
+
+function pointFlags(engine: TypeBEngine, input: TypeBInput, depthCm: number, dMaxCm: number) {
+  const flags: string[] = [];
+  if (depthCm < dMaxCm) flags.push('build-up region (photon-only kernel)');
+  if (engine === 'pencil-beam') {
+    const depths = typeBModel(input.energy).pencil.depthsCm;
+    if (radiologicalDepthCm(input.phantom, depthCm) > (depths[depths.length - 1] as number))
+      flags.push('beyond the pencil-kernel depth table (clamped)');
+  }
+  return flags;
 }
 
 export function typeBMethodResult(engine: TypeBEngine, input: TypeBInput): MethodResult {
@@ -62,7 +73,7 @@ export function typeBMethodResult(engine: TypeBEngine, input: TypeBInput): Metho
       depthCm: p.depthCm,
       cf: cfAt(n + k),
       dosePerMuCGy: het[n + k] as number,
-      flags: p.depthCm < dMax ? ['build-up region (photon-only kernel)'] : [],
+      flags: pointFlags(engine, input, p.depthCm, dMax),
     })),
   };
 }
