@@ -4,6 +4,7 @@
 import { readFileSync } from 'node:fs';
 import { expect, test, type Page, type Request } from '@playwright/test';
 import { parseCaseText } from '../../src/io/caseFile';
+import { shareHashOf } from '../../src/io/shareLink';
 
 const AUTOSAVE_KEY = 'lamina.autosave.case';
 
@@ -197,5 +198,28 @@ test('a case whose name and point id are HTML shows them as text and injects not
   await page.getByRole('tab', { name: 'Depth dose' }).click();
   await page.screenshot({ path: testInfo.outputPath('html-as-text-dose.png'), fullPage: true });
   expect(await page.locator('img[src="x"], b:text("bold"), svg[onload]').count()).toBe(0);
+  expect(await page.evaluate(() => (window as DebugWindow).__pwned)).toBeUndefined();
+});
+
+test('a share link whose case name and point id are HTML opens them as text', async ({ page }) => {
+  await freshPage(page);
+  const evilName = '<img src=x onerror="window.__pwned=4">';
+  const evilPoint = '<iframe src=x></iframe>';
+  const hash = await shareHashOf({
+    kind: 'case',
+    value: {
+      format: 'lamina.case',
+      version: 1,
+      name: evilName,
+      beam: { energy: '6MV', setup: { kind: 'SSD', ssdCm: 100 }, fieldXCm: 10, fieldYCm: 10 },
+      layers: [{ materialId: 'water', thicknessCm: 20 }],
+      points: [{ id: evilPoint, depthCm: 10 }],
+    },
+  });
+  await page.goto('about:blank');
+  await page.goto(`/${hash}`);
+  await expect(page.locator('#case-name')).toHaveValue(evilName);
+  await expect(page.getByTestId('point-table')).toContainText(evilPoint);
+  expect(await page.locator('img[src="x"], iframe').count()).toBe(0);
   expect(await page.evaluate(() => (window as DebugWindow).__pwned)).toBeUndefined();
 });

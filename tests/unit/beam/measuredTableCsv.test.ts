@@ -44,6 +44,12 @@ describe('parseDepthFieldCsv', () => {
     expect(problemsOf(text)).toEqual(['row 4, column 3 (C): "abc" is not a number']);
   });
 
+  it('parseDepthFieldCsv rejects a number too large to be finite ("1e999"), naming the cell', () => {
+    // found by the measured-table fuzz: "1e999" matches the number pattern but reads as Infinity
+    const text = GOOD.replace('10,0.75', '1e999,0.75');
+    expect(problemsOf(text)).toEqual(['row 4, column 1 (A): "1e999" is too large to be a number']);
+  });
+
   it('parseDepthFieldCsv rejects a depth that does not increase', () => {
     const text = GOOD.replace('10,0.75', '1.5,0.75');
     expect(problemsOf(text)[0]).toMatch(/^row 4, column 1 \(A\): depth 1\.5 cm does not increase/);
