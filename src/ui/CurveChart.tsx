@@ -90,6 +90,8 @@ export function CurveChart(props: CurveChartProps) {
             width={b.width}
             height={plot.height}
             className={`warn-band sev-${b.severity}`}
+            tabIndex={0}
+            aria-label={bandTitle.get(b.key)}
           >
             <title>{bandTitle.get(b.key)}</title>
           </rect>
