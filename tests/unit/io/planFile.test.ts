@@ -1,4 +1,4 @@
-import { readFileSync } from 'node:fs';
+import { readdirSync, readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { parsePlanText, serializePlan, validatePlan, planOfCase } from '../../../src/io/planFile';
 import { parseCaseText } from '../../../src/io/caseFile';
@@ -78,5 +78,21 @@ describe('plan files', () => {
     expect(!r3.ok && r3.problems.map((p) => p.path)).toEqual(['prescription.pointId']);
     const fmt = validatePlan({ ...planDoc, format: 'other' });
     expect(!fmt.ok && fmt.problems.map((p) => p.path)).toContain('format');
+  });
+
+  it('every demo in public/cases/ is listed in its index and opens as a valid case or plan', () => {
+    const index = JSON.parse(readFileSync('public/cases/index.json', 'utf8')) as {
+      demos: { file: string; kind: 'case' | 'plan' }[];
+    };
+    const files = readdirSync('public/cases').filter(
+      (f) => f.endsWith('.json') && f !== 'index.json',
+    );
+    expect(index.demos.map((d) => d.file).sort()).toEqual(files.sort());
+    for (const d of index.demos) {
+      const raw = JSON.parse(readFileSync(`public/cases/${d.file}`, 'utf8')) as { format: string };
+      expect(raw.format, d.file).toBe(`lamina.${d.kind}`);
+      const r = validatePlan(raw);
+      expect(r.ok ? [] : r.problems, d.file).toEqual([]);
+    }
   });
 });
