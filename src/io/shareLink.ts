@@ -14,6 +14,43 @@ export type ShareDecodeResult =
 
 const KEYS = { case: 'case', plan: 'plan' } as const;
 
+/**
+ * Most JSON a link may unpack to. The largest valid document (a 12-beam plan, each beam with a
+ * full inline water table) stays below it; a few kilobytes of deflate can otherwise claim
+ * gigabytes and stall or crash the tab.
+ */
+export const MAX_LINK_JSON_BYTES = 16 * 1024 * 1024;
+
+/** Inflate deflate-raw bytes, giving up as soon as the output passes `maxBytes`. */
+async function inflateBounded(
+  bytes: Uint8Array<ArrayBuffer>,
+  maxBytes: number,
+): Promise<Uint8Array<ArrayBuffer>> {
+  const reader = new Blob([bytes])
+    .stream()
+    .pipeThrough(new DecompressionStream('deflate-raw'))
+    .getReader();
+  const chunks: Uint8Array[] = [];
+  let total = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    total += value.length;
+    if (total > maxBytes) {
+      await reader.cancel().catch(() => undefined);
+      throw new Error(`it unpacks to more than ${Math.round(maxBytes / 1024 / 1024)} MiB`);
+    }
+    chunks.push(value);
+  }
+  const out = new Uint8Array(total);
+  let at = 0;
+  for (const c of chunks) {
+    out.set(c, at);
+    at += c.length;
+  }
+  return out;
+}
+
 async function pipeBytes(
   bytes: Uint8Array<ArrayBuffer>,
   stream: CompressionStream | DecompressionStream,
@@ -71,10 +108,7 @@ export async function decodeShareHash(hash: string): Promise<ShareDecodeResult> 
   const kind = m[1] as 'case' | 'plan';
   let raw: unknown;
   try {
-    const bytes = await pipeBytes(
-      bytesOfBase64Url(m[2] ?? ''),
-      new DecompressionStream('deflate-raw'),
-    );
+    const bytes = await inflateBounded(bytesOfBase64Url(m[2] ?? ''), MAX_LINK_JSON_BYTES);
     raw = JSON.parse(new TextDecoder('utf-8', { fatal: true }).decode(bytes));
   } catch (e) {
     return {
