@@ -10,7 +10,7 @@ import {
 } from '../engine/phantom/slabPhantom';
 import type { MethodResult } from '../engine/methodResult';
 import type { LaminaCase } from '../io/caseSchema';
-import type { Warning } from '../engine/equilibrium';
+import { withWarningFlags, type Warning } from '../engine/equilibrium';
 import { caseWarnings } from './caseWarnings';
 import type { WaterData } from '../engine/beam/waterData';
 import { isTypeAMethodId, typeAForCase, type TypeAVariants } from './typeAForCase';
@@ -104,6 +104,8 @@ export function calculateCase(c: LaminaCase, options: CalcOptions = {}): CalcRep
       .filter((id) => !isTypeAMethodId(id) && !isTypeBMethodId(id))
       .map((id) => ({ id, reason: 'method not implemented yet' })),
   ];
+  const methods = [...typeA.methods, ...typeB, ...mc.methods];
+  const warnings = caseWarnings(c, phantom, methods, typeA.waterData);
   return {
     format: CALC_FORMAT,
     version: CALC_VERSION,
@@ -140,9 +142,10 @@ export function calculateCase(c: LaminaCase, options: CalcOptions = {}): CalcRep
     })),
     depthCm: grid,
     radiologicalDepthCm: grid.map((d) => radiologicalDepthCm(phantom, d)),
-    methods: [...typeA.methods, ...typeB, ...mc.methods],
+    // Each method's points carry the flags of the warnings that concern that method there.
+    methods: withWarningFlags(methods, warnings),
     unavailable,
-    warnings: caseWarnings(c, phantom, typeA.methods, typeA.waterData),
+    warnings,
     cautions: [...CAUTIONS],
   };
 }
