@@ -75,6 +75,30 @@ test('entering the planning dose and MU gives a verdict; print view and PDF reco
   expect(pdf.startsWith('%PDF-')).toBe(true);
   expect(pdf).toContain('(Point check per beam) Tj');
   expect(pdf).toContain(`(${(checkMu * 1.1).toFixed(1)}) Tj`);
+
+  // The figure as SVG and PNG files.
+  const [svg] = await Promise.all([
+    page.waitForEvent('download'),
+    page.getByRole('button', { name: 'Figure: SVG' }).click(),
+  ]);
+  const svgText = readFileSync(await svg.path(), 'utf8');
+  expect(svgText).toMatch(/^<\?xml/);
+  expect(svgText).toContain('<polyline');
+  const [png] = await Promise.all([
+    page.waitForEvent('download'),
+    page.getByRole('button', { name: 'Figure: PNG' }).click(),
+  ]);
+  expect(png.suggestedFilename()).toMatch(/^lamina-depth-dose-\d{4}-\d{2}-\d{2}\.png$/);
+  expect(
+    readFileSync(await png.path())
+      .subarray(1, 4)
+      .toString('latin1'),
+  ).toBe('PNG');
+
+  // A second beam from a case file: the sum over beams appears.
+  await page.getByTestId('check-add-beam').setInputFiles('public/cases/water-reference-6mv.json');
+  await expect(page.getByTestId('check-beams').locator('tbody tr')).toHaveCount(2);
+  await expect(page.getByTestId('check-total-table')).toBeVisible();
 });
 
 test('a two-beam plan opened from a file shows the total, and travels through a link', async ({
