@@ -12,8 +12,29 @@ export function fileNameFor(name: string): string {
   return `${slug || 'case'}.json`;
 }
 
+/** Largest case file read (a valid case, inline water tables included, is under 1 MB). */
+export const MAX_CASE_FILE_BYTES = 8 * 1024 * 1024;
+
 export async function openCaseFile(file: File): Promise<void> {
-  const text = await file.text();
+  const refuse = (why: string) =>
+    setNotice({
+      kind: 'error',
+      title: `${file.name} was not opened; the current case is unchanged.`,
+      lines: [why],
+    });
+  if (file.size > MAX_CASE_FILE_BYTES) {
+    refuse(
+      `(file): ${(file.size / 1024 / 1024).toFixed(1)} MB is too large for a case file (at most ${MAX_CASE_FILE_BYTES / 1024 / 1024} MB)`,
+    );
+    return;
+  }
+  let text: string;
+  try {
+    text = await file.text();
+  } catch (e) {
+    refuse(`(file): could not be read (${e instanceof Error ? e.message : String(e)})`);
+    return;
+  }
   const r = parseCaseText(text);
   if (r.ok) {
     replaceCase(r.value);

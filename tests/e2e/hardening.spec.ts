@@ -223,3 +223,19 @@ test('a share link whose case name and point id are HTML opens them as text', as
   expect(await page.locator('img[src="x"], iframe').count()).toBe(0);
   expect(await page.evaluate(() => (window as DebugWindow).__pwned)).toBeUndefined();
 });
+
+test('a file far too large for a case is refused without reading it, and the case stays', async ({
+  page,
+}) => {
+  await freshPage(page);
+  await page.getByTestId('preset').selectOption('chest');
+  await expect(page.getByTestId('layer-3')).toBeVisible();
+  await page.getByTestId('open-file').setInputFiles({
+    name: 'huge.json',
+    mimeType: 'application/json',
+    buffer: Buffer.alloc(9 * 1024 * 1024, 0x20),
+  });
+  await expect(page.getByTestId('file-notice')).toContainText('huge.json was not opened');
+  await expect(page.getByTestId('file-notice')).toContainText('too large for a case file');
+  await expect(page.getByTestId('layer-3')).toBeVisible();
+});
