@@ -39,9 +39,9 @@ describe('plan files under generated input (read → check → report)', () => {
           const again = parsePlanText(serializePlan(r.value));
           if (!again.ok) throw new Error(`saved plan does not re-read: ${JSON.stringify(again)}`);
           expect(again.value).toEqual(r.value);
-          // Every 8th plan goes through the calculation and the point check (type-A Batho with
+          // Every 16th plan goes through the calculation and the point check (type-A Batho with
           // the demo table: the check's MU and differences read its dose per MU).
-          if (seen.valid % 8 === 0) {
+          if (seen.valid % 16 === 0) {
             seen.calculated++;
             const report = calculatePlan(r.value, {
               waterData,
@@ -57,7 +57,7 @@ describe('plan files under generated input (read → check → report)', () => {
     );
     expect(seen.valid).toBeGreaterThan(1500);
     expect(seen.rejected).toBeGreaterThan(3000);
-    expect(seen.calculated).toBeGreaterThan(200);
+    expect(seen.calculated).toBeGreaterThan(100);
   });
 
   it('names the embedded case field when a beam carries a broken case', () => {
