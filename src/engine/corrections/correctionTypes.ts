@@ -24,6 +24,8 @@ export interface CorrectionOptions {
   etarRhoTilde?: number | undefined;
   /** ETAR: layer weights for ρ̃; the analytic exponential-kernel weighting when absent. */
   etarWeights?: ScatterWeightFunction | undefined;
+  /** What the supplied ETAR weights are, for the variant text (e.g. "scatter part of the water kernel"). */
+  etarWeightsSource?: string | undefined;
   /** ETAR default weighting: scatter attenuation length λ (cm); 1/μ_eff of the water data when absent. */
   etarScatterLengthCm?: number | undefined;
 }

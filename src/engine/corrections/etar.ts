@@ -21,7 +21,7 @@ export const etarMethod: TypeAMethod = {
       o.etarRhoTilde !== undefined
         ? `ρ̃ = ${o.etarRhoTilde} (entered)`
         : o.etarWeights
-          ? 'ρ̃ from supplied scatter weights'
+          ? `ρ̃ from layer weights: ${o.etarWeightsSource ?? 'supplied scatter weights'}`
           : `ρ̃ from an exponential scatter kernel over the field (λ = ${o.etarScatterLengthCm !== undefined ? `${o.etarScatterLengthCm} cm` : '1/μ_eff'})`;
     return `TAR form (TMR × PSF ratio), s̃ = ρ̃·s_d, ${rho}`;
   },

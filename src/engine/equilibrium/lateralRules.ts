@@ -93,7 +93,7 @@ export function ledWarnings(ctx: RuleContext): Warning[] {
       explanation:
         'Electrons scattered out of the narrow beam in low density are not replaced from outside it, so the real dose on the axis is lower than one-dimensional methods and pencil-beam scaling predict.',
       advice:
-        'Prefer the Monte Carlo or superposition result here; consider a larger field or a lower energy.',
+        'Prefer the Monte Carlo result here (the superposition follows only part of this effect when the low-density layer lies under water); consider a larger field or a lower energy.',
     });
     if (w) out.push(w);
   }

@@ -72,12 +72,11 @@ describe('npm run calc with water data', () => {
     );
   });
 
-  it('lists type-A methods as needing water data when none is given', () => {
+  it('uses the modelled beam for the type-A methods when no table is given, and says so', () => {
     const r = calc([CASE, '--methods', 'rtmr,batho']);
     expect(r.code).toBe(0);
-    expect(r.out).toMatch(
-      /Method rtmr: not computed \(needs water data: load a measured TMR\/PDD table\)/,
-    );
+    expect(r.out).toMatch(/Method rtmr: .*water data: modelled beam \(6MV/);
+    expect(r.out).not.toMatch(/needs water data/);
   });
 
   it('exits with code 2 and names row and column of a bad table', () => {

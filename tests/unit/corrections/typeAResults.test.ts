@@ -21,13 +21,11 @@ function demoCase(): LaminaCase {
 const TMR_CSV = readFileSync('public/tables/demo-6mv-tmr.csv', 'utf8');
 
 describe('calculateCase with type-A methods', () => {
-  it('without water data every requested type-A method is unavailable with the reason', () => {
-    const r = calculateCase(demoCase(), { methods: ['batho', 'etar', 'monte-carlo'] });
-    expect(r.methods).toEqual([]);
-    expect(r.unavailable.filter((u) => u.id !== 'monte-carlo')).toEqual([
-      { id: 'batho', reason: NEEDS_WATER_DATA },
-      { id: 'etar', reason: NEEDS_WATER_DATA },
-    ]);
+  it('without a measured table the type-A methods use the modelled beam and say so', () => {
+    const r = calculateCase(demoCase(), { methods: ['batho', 'etar'] });
+    expect(r.methods.map((m) => m.id)).toEqual(['batho', 'etar']);
+    for (const m of r.methods) expect(m.waterData).toMatch(/^modelled beam \(6MV/);
+    expect(r.unavailable.map((u) => u.reason)).not.toContain(NEEDS_WATER_DATA);
   });
 
   it('with water data gives each method a finite curve on the report grid and its points', () => {
