@@ -11,6 +11,8 @@ export interface MethodCurve {
   cf: (number | null)[];
   /** One standard deviation of dosePerMuCGy (Monte Carlo only). */
   sigmaDosePerMuCGy?: number[];
+  /** One standard deviation of cf (Monte Carlo only). */
+  sigmaCf?: number[];
 }
 
 export interface MethodPoint {

@@ -15,6 +15,7 @@ import { useAutosave } from './useAutosave';
 import { useCompute } from './useCompute';
 import { useElementWidth } from './useElementWidth';
 import { WaterDataPanel } from './WaterDataPanel';
+import { useShownReport } from './montecarlo/useShownReport';
 import { editCase } from '../state/store';
 
 const TABS: { id: ViewTab; label: string }[] = [
@@ -116,7 +117,8 @@ function CaseName() {
 
 function Workbench() {
   const tab = useAppStore((s) => s.tab);
-  const report = useAppStore((s) => s.calc.report);
+  // The latest calculation plus the page's Monte Carlo curve while its run matches the case.
+  const report = useShownReport();
   const [ref, width] = useElementWidth<HTMLDivElement>();
   const showsDepth = tab === 'dose' || tab === 'cf';
   return (

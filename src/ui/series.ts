@@ -50,6 +50,7 @@ export function cfSeries(report: CalcReport, hidden: readonly string[]): CurveSe
         color: st.color,
         dash: st.dash,
         values: m.curve.cf.map((v) => (isNum(v) ? v : null)),
+        sigma: m.curve.sigmaCf,
       };
     });
 }

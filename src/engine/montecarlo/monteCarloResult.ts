@@ -122,6 +122,7 @@ export function finalizeMonteCarlo(
       dosePerMuCGy: onGrid.value.map(finite),
       cf: cfGrid.value.map(finite),
       sigmaDosePerMuCGy: onGrid.sigma.map((s) => (Number.isFinite(s) ? s : 0)),
+      sigmaCf: cfGrid.sigma.map((s) => (Number.isFinite(s) ? s : 0)),
     },
     points: plan.points.map((p, i) => {
       const dose = atPoints.value[i] as number;

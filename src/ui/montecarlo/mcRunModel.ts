@@ -1,0 +1,101 @@
+// Pure helpers of the page's Monte Carlo run: which case a run belongs to (its key), the typed
+// histories and seed checked with a message, and the wording of progress and uncertainty.
+import type { EditorCase } from '../../state/editorCase';
+
+/** Histories per scenario offered as presets (case, water and calibration runs each get these). */
+export const HISTORY_PRESETS: readonly { histories: number; label: string }[] = [
+  { histories: 50_000, label: '5 × 10⁴ (quick look)' },
+  { histories: 200_000, label: '2 × 10⁵' },
+  { histories: 1_000_000, label: '1 × 10⁶' },
+  { histories: 5_000_000, label: '5 × 10⁶' },
+];
+
+/** Bounds of a typed number of histories: enough for ten batches, not more than a long afternoon. */
+export const HISTORY_LIMITS = { min: 1_000, max: 50_000_000 } as const;
+
+export type Parsed<T> = { ok: true; value: T } | { ok: false; message: string };
+
+function numberOfText(text: string): number {
+  // Spaces, thin spaces and underscores group digits ("1 000 000", "1_000_000"); "2e5" is allowed.
+  const t = text.trim().replace(/[\s\u2009\u202f_]/g, '');
+  if (t === '') return Number.NaN;
+  return Number(t);
+}
+
+export function parseHistories(text: string): Parsed<number> {
+  const v = numberOfText(text);
+  if (!Number.isFinite(v)) return { ok: false, message: `Histories: "${text}" is not a number` };
+  if (!Number.isInteger(v)) return { ok: false, message: 'Histories: must be a whole number' };
+  if (v < HISTORY_LIMITS.min || v > HISTORY_LIMITS.max)
+    return {
+      ok: false,
+      message: `Histories: must be between ${groupDigits(HISTORY_LIMITS.min)} and ${groupDigits(HISTORY_LIMITS.max)}`,
+    };
+  return { ok: true, value: v };
+}
+
+export function parseSeed(text: string): Parsed<number> {
+  const v = numberOfText(text);
+  if (!Number.isFinite(v) || !Number.isInteger(v))
+    return { ok: false, message: `Seed: "${text}" is not a whole number` };
+  if (v < 0 || v > 0xffffffff)
+    return { ok: false, message: 'Seed: must be between 0 and 4 294 967 295' };
+  return { ok: true, value: v };
+}
+
+/** "1 000 000" (thin-space-free, plain spaces: readable and copyable). */
+export function groupDigits(n: number): string {
+  const s = Math.round(Math.abs(n)).toString();
+  const grouped = s.replace(/\B(?=(\d{3})+(?!\d))/g, ' ');
+  return n < 0 ? `−${grouped}` : grouped;
+}
+
+/**
+ * The key a run is tied to: what the Monte Carlo result depends on (beam, layers, points, water
+ * data and which water data the page uses for the dose-per-MU calibration). The case name,
+ * notes and layer labels do not change the result, so editing them does not make a run stale.
+ */
+export function monteCarloCaseKey(c: EditorCase, waterSource: string | undefined): string {
+  return JSON.stringify({
+    beam: c.beam,
+    layers: c.layers.map((l) => [l.materialId, l.thicknessCm, l.densityGPerCm3 ?? null]),
+    points: c.points.map((p) => [p.id, p.depthCm]),
+    waterData: waterSource === 'modelled' ? null : (c.waterData ?? null),
+    waterSource: waterSource ?? null,
+  });
+}
+
+/** A run's result is shown only while the case it was started for is the current one. */
+export function isRunCurrent(runKey: string | null, currentKey: string): boolean {
+  return runKey !== null && runKey === currentKey;
+}
+
+/** "0.782 ± 0.004 cGy/MU" and "0.51 %" for a dose and its 1σ. */
+export function formatDoseSigma(
+  dosePerMuCGy: number | null,
+  sigmaDosePerMuCGy: number,
+): { absolute: string; relative: string } {
+  if (dosePerMuCGy === null || !Number.isFinite(dosePerMuCGy) || dosePerMuCGy <= 0)
+    return { absolute: '—', relative: '—' };
+  const rel = sigmaDosePerMuCGy / dosePerMuCGy;
+  return {
+    absolute: `${dosePerMuCGy.toFixed(3)} ± ${sigmaDosePerMuCGy.toFixed(3)} cGy/MU`,
+    relative: `${(100 * rel).toFixed(rel < 0.1 ? 2 : 1)} %`,
+  };
+}
+
+/** "4.2 s", "1 min 05 s". */
+export function formatElapsed(ms: number): string {
+  if (!Number.isFinite(ms) || ms < 0) return '—';
+  const s = ms / 1000;
+  if (s < 60) return `${s.toFixed(1)} s`;
+  const m = Math.floor(s / 60);
+  const rest = Math.floor(s - 60 * m);
+  return `${m} min ${rest.toString().padStart(2, '0')} s`;
+}
+
+/** Fraction of the run done (batches handed back over batches planned), 0–1. */
+export function fractionDone(tasksDone: number, totalTasks: number): number {
+  if (!(totalTasks > 0)) return 0;
+  return Math.min(1, Math.max(0, tasksDone / totalTasks));
+}
