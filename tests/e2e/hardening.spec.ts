@@ -15,6 +15,14 @@ interface DebugHooks {
 }
 type DebugWindow = Window & { __laminaDebug?: DebugHooks; __pwned?: unknown };
 
+/** Put the demo water table (invented data) in the case, from the Water data view. */
+async function useDemoTable(page: Page) {
+  await page.getByRole('tab', { name: 'Water data' }).click();
+  await page.getByTestId('load-demo-water').click();
+  await expect(page.getByTestId('water-in-case')).toBeVisible();
+  await page.getByRole('tab', { name: 'Depth dose' }).click();
+}
+
 async function freshPage(page: Page, path = '/') {
   await page.goto(path);
   await page.evaluate(() => localStorage.clear());
@@ -139,7 +147,7 @@ test('no request leaves the page’s origin during a full journey, under a stric
   expect(csp).not.toMatch(/https?:|\*|unsafe-eval/);
 
   await page.getByTestId('layer-1-thickness').fill('3');
-  await page.getByTestId('quick-demo-water').click();
+  await useDemoTable(page);
   await expect(page.getByTestId('dose-chart').locator('path.curve')).not.toHaveCount(0);
   const download = page.waitForEvent('download');
   await page.getByTestId('save').click();
@@ -190,7 +198,7 @@ test('a case whose name and point id are HTML shows them as text and injects not
     ),
   });
   await expect(page.locator('#case-name')).toHaveValue(evilName);
-  await page.getByTestId('quick-demo-water').click();
+  await useDemoTable(page);
   await expect(page.getByTestId('point-table')).toContainText(evilPoint);
   await page.getByRole('tab', { name: 'Point check & report' }).click();
   await page.waitForTimeout(500);
