@@ -18,12 +18,14 @@ useAppStore.subscribe((s, prev) => {
   if (
     s.theme !== prev.theme ||
     s.normalisation !== prev.normalisation ||
-    s.hiddenMethods !== prev.hiddenMethods
+    s.hiddenMethods !== prev.hiddenMethods ||
+    s.waterSource !== prev.waterSource
   )
     writePrefs(storage, {
       theme: s.theme,
       normalisation: s.normalisation,
       hiddenMethods: s.hiddenMethods,
+      waterSource: s.waterSource,
     });
 });
 

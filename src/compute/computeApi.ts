@@ -12,6 +12,7 @@ import {
 } from '../engine/beam/measuredTable';
 import type { TypeAVariants } from './typeAForCase';
 import { ssdCmOf } from '../engine/beam/geometry';
+import { modelledWaterData } from '../engine/beam/modelledBeam';
 import {
   typeBDosePlane,
   type DosePlane,
@@ -24,6 +25,8 @@ import {
  */
 export interface WorkerCalcOptions extends Omit<CalcOptions, 'waterData' | 'typeA'> {
   waterTable?: MeasuredTableInput;
+  /** 'modelled': the modelled beam of the case's energy, in place of any table (page choice). */
+  waterSource?: 'case' | 'modelled';
   typeA?: Pick<
     TypeAVariants,
     'bathoTable' | 'etarRhoTilde' | 'etarScatterLengthCm' | 'doseToMedium'
@@ -54,7 +57,15 @@ export const computeApi = {
     | { ok: false; problems: { path: string; message: string }[] } {
     const v = validateCase(raw);
     if (!v.ok) return v;
-    const { waterTable, ...rest } = options;
+    const { waterTable, waterSource, ...rest } = options;
+    if (waterSource === 'modelled')
+      return {
+        ok: true,
+        report: calculateCase(v.value, {
+          ...rest,
+          waterData: modelledWaterData(v.value.beam.energy),
+        }),
+      };
     if (!waterTable) return { ok: true, report: calculateCase(v.value, rest) };
     const table = buildMeasuredWaterData(waterTable);
     if (!table.ok)

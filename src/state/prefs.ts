@@ -5,7 +5,7 @@ import type { AppState, Normalisation, Theme } from './store';
 
 export const PREFS_KEY = 'lamina.prefs';
 
-export type Prefs = Pick<AppState, 'theme' | 'normalisation' | 'hiddenMethods'>;
+export type Prefs = Pick<AppState, 'theme' | 'normalisation' | 'hiddenMethods' | 'waterSource'>;
 
 const THEMES: readonly Theme[] = ['auto', 'light', 'dark'];
 const NORMALISATIONS: readonly Normalisation[] = [
@@ -28,6 +28,7 @@ export function readPrefs(storage: StorageLike | null): Partial<Prefs> {
   if (THEMES.includes(r.theme as Theme)) out.theme = r.theme as Theme;
   if (NORMALISATIONS.includes(r.normalisation as Normalisation))
     out.normalisation = r.normalisation as Normalisation;
+  if (r.waterSource === 'modelled' || r.waterSource === 'table') out.waterSource = r.waterSource;
   if (Array.isArray(r.hiddenMethods))
     out.hiddenMethods = r.hiddenMethods.filter((m): m is string => typeof m === 'string');
   return out;

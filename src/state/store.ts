@@ -10,6 +10,8 @@ import { PRESETS } from './presets';
 
 export type Normalisation = 'dosePerMu' | 'percentWaterDmax' | 'relativeToWater';
 export type Theme = 'auto' | 'light' | 'dark';
+/** Which water data the type-A methods read: the modelled beam, or the table in the case. */
+export type WaterSource = 'modelled' | 'table';
 export type ViewTab = 'dose' | 'cf' | 'water' | 'plane' | 'mc' | 'check';
 
 export interface FieldDraft {
@@ -40,6 +42,7 @@ export interface AppState {
   hiddenMethods: string[];
   hiddenWarningMethods: string[];
   theme: Theme;
+  waterSource: WaterSource;
   tab: ViewTab;
   calc: CalcState;
   notice: Notice | null;
@@ -55,6 +58,7 @@ export const useAppStore = create<AppState>()(() => ({
   hiddenMethods: [],
   hiddenWarningMethods: [],
   theme: 'auto',
+  waterSource: 'modelled',
   tab: 'dose',
   calc: { status: 'idle', report: null, problems: [], error: null, requestId: 0, elapsedMs: null },
   notice: null,
@@ -116,6 +120,10 @@ export function setNormalisation(normalisation: Normalisation): void {
 
 export function setTheme(theme: Theme): void {
   set({ theme });
+}
+
+export function setWaterSource(waterSource: WaterSource): void {
+  set({ waterSource });
 }
 
 export function setTab(tab: ViewTab): void {

@@ -1,5 +1,6 @@
 // Beam set-up: energy, SSD or SAD geometry, field size at 100 cm.
 import { BEAM_ENERGIES, BEAM_ENERGY_LABELS, isBeamEnergy } from '../engine/beam/energies';
+import { NEEDS_WATER_DATA } from '../compute/typeAForCase';
 import { editCase, setTab, useAppStore } from '../state/store';
 import type { EditorCase } from '../state/editorCase';
 import { NumberField } from './NumberField';
@@ -11,26 +12,28 @@ function setBeam(patch: Partial<Beam>, key: string | null = null) {
   editCase((c) => ({ ...c, beam: { ...c.beam, ...patch } }), key);
 }
 
+/** The water data the last calculation's type-A methods actually read, as the engine names it. */
 function WaterDataLine() {
-  const water = useAppStore((s) => s.history.present.waterData);
+  const used = useAppStore(
+    (s) => s.calc.report?.methods.find((m) => m.methodClass === 'type A')?.waterData ?? null,
+  );
+  const needs = useAppStore(
+    (s) => s.calc.report?.unavailable.some((u) => u.reason === NEEDS_WATER_DATA) ?? false,
+  );
   return (
     <div className="water-line" data-testid="water-line">
       <span className="label">Water data</span>{' '}
-      {water ? (
-        <span
-          title={
-            water.scatterFileName
-              ? `scatter factors: ${water.scatterFileName}`
-              : 'no scatter factors'
-          }
-        >
-          measured table {water.fileName}
+      {used ? (
+        <span className="water-used" title={used}>
+          {used.split(';')[0]}
         </span>
+      ) : needs ? (
+        <span className="missing-text">no table loaded (type-A methods cannot run)</span>
       ) : (
-        <span className="missing-text">none (type-A methods cannot run)</span>
+        <span className="hint">—</span>
       )}{' '}
       <button type="button" onClick={() => setTab('water')}>
-        {water ? 'Change…' : 'Load…'}
+        Change…
       </button>
     </div>
   );

@@ -1,7 +1,7 @@
 // What the calculation could and could not do, in plain words: case problems with their field
 // paths, methods that are unavailable and why, or that no method has produced results.
 import { NEEDS_WATER_DATA } from '../compute/typeAForCase';
-import { setTab, useAppStore } from '../state/store';
+import { setTab, setWaterSource, useAppStore } from '../state/store';
 import { loadDemoTables } from './demoTables';
 import { RetryButton } from './RetryButton';
 
@@ -38,7 +38,14 @@ export function ResultStatus() {
       ) : null}
       {r && r.unavailable.some((u) => u.reason === NEEDS_WATER_DATA) ? (
         <div className="notice info" data-testid="needs-water">
-          <strong>The type-A methods need water data</strong> (TMR or PDD with scatter factors).{' '}
+          <strong>The type-A methods need water data</strong>: the case has no measured table.{' '}
+          <button
+            type="button"
+            onClick={() => setWaterSource('modelled')}
+            data-testid="quick-modelled"
+          >
+            Use the modelled beam
+          </button>{' '}
           <button type="button" onClick={() => setTab('water')}>
             Load a measured table…
           </button>{' '}

@@ -1,7 +1,7 @@
 // Water data: load a measured TMR or PDD table and scatter factors (file or paste), see them
 // checked (problems name row and column) and plotted, and choose what the case's type-A methods
-// read. The modelled beam is offered once an engine provides it.
-import { useAppStore, editCase } from '../state/store';
+// read: the modelled beam of the case's energy, or the measured table carried in the case.
+import { useAppStore, editCase, setWaterSource } from '../state/store';
 import {
   checkWaterDraft,
   draftOf,
@@ -82,42 +82,68 @@ function TablePlot({ width, check }: { width: number; check: ReturnType<typeof c
 export function WaterDataPanel({ width }: { width: number }) {
   const draft = useWaterDraft();
   const inCase = useAppStore((s) => s.history.present.waterData);
+  const source = useAppStore((s) => s.waterSource);
+  const energy = useAppStore((s) => s.history.present.beam.energy);
   const check = checkWaterDraft(draft);
   const set = (patch: Partial<WaterDraft>) => patchWaterDraft(patch);
   const same =
     check.ok && inCase !== undefined && JSON.stringify(check.waterData) === JSON.stringify(inCase);
   return (
     <section className="water" data-testid="water-panel">
-      <h2>Water data used by the case</h2>
-      <fieldset className="segmented">
+      <h2>Water data for the type-A methods</h2>
+      <fieldset className="water-source">
         <legend className="sr-only">Water data source</legend>
-        <label title="No modelled beam is available in this build yet">
-          <input type="radio" name="water-source" disabled checked={false} readOnly /> Modelled beam
-          (not available yet)
+        <label>
+          <input
+            type="radio"
+            name="water-source"
+            checked={source === 'modelled'}
+            onChange={() => setWaterSource('modelled')}
+            data-testid="source-modelled"
+          />{' '}
+          Modelled beam ({energy}): generated with this workbench's own kernels, photon-only (no
+          contaminant electrons, so build-up doses are low). A model, not a commissioned beam.
         </label>
         <label>
-          <input type="radio" name="water-source" checked={inCase !== undefined} readOnly />{' '}
-          Measured table
+          <input
+            type="radio"
+            name="water-source"
+            checked={source === 'table'}
+            onChange={() => setWaterSource('table')}
+            data-testid="source-table"
+          />{' '}
+          Measured table carried in the case
+          {inCase ? (
+            <>
+              : <strong>{inCase.fileName}</strong> ({inCase.kind.toUpperCase()}
+              {inCase.kind === 'pdd' ? ` at SSD ${inCase.ssdCm} cm` : ''})
+              {inCase.scatterFileName
+                ? ` with scatter factors ${inCase.scatterFileName}`
+                : ', no scatter factors'}
+            </>
+          ) : (
+            ' (none loaded: the calculation falls back to what the engine provides)'
+          )}
         </label>
       </fieldset>
       {inCase ? (
         <p data-testid="water-in-case">
-          In use: <strong>{inCase.fileName}</strong> ({inCase.kind.toUpperCase()}
-          {inCase.kind === 'pdd' ? ` at SSD ${inCase.ssdCm} cm` : ''})
-          {inCase.scatterFileName
-            ? ` with scatter factors ${inCase.scatterFileName}`
-            : ', no scatter factors'}
-          .{' '}
           <button type="button" onClick={() => patchWaterDraft(draftOf(inCase))}>
-            Edit
+            Edit the case's table
           </button>{' '}
-          <button type="button" onClick={() => editCase((c) => ({ ...c, waterData: undefined }))}>
-            Remove from case
+          <button
+            type="button"
+            onClick={() => {
+              editCase((c) => ({ ...c, waterData: undefined }));
+              setWaterSource('modelled');
+            }}
+          >
+            Remove the table from the case
           </button>
         </p>
       ) : (
-        <p className="notice info">
-          No water data in this case: the type-A methods cannot run. Load a measured table below, or{' '}
+        <p className="hint">
+          No measured table in this case. Load one below, or{' '}
           <button type="button" onClick={() => void loadDemoTables()} data-testid="load-demo-water">
             use the demo 6 MV table (invented data)
           </button>
@@ -247,9 +273,12 @@ export function WaterDataPanel({ width }: { width: number }) {
             className="primary"
             disabled={same}
             data-testid="use-water"
-            onClick={() => editCase((c) => ({ ...c, waterData: check.waterData }))}
+            onClick={() => {
+              editCase((c) => ({ ...c, waterData: check.waterData }));
+              setWaterSource('table');
+            }}
           >
-            {same ? 'In use by the case' : 'Use this table in the case'}
+            {same ? 'This is the case’s table' : 'Use this table in the case'}
           </button>{' '}
           <button type="button" onClick={() => patchWaterDraft({ ...EMPTY_WATER_DRAFT })}>
             Clear

@@ -1,6 +1,6 @@
 // The demo water tables shipped with the page (invented 6 MV-like data, served from the same
 // origin): load them into the water-data draft and put them in the case.
-import { editCase, setNotice } from '../state/store';
+import { editCase, setNotice, setWaterSource } from '../state/store';
 import {
   checkWaterDraft,
   patchWaterDraft,
@@ -29,8 +29,11 @@ export async function loadDemoTables(): Promise<void> {
       scatterCsv,
     });
     const check = checkWaterDraft(useWaterDraft.getState());
-    if (check.ok) editCase((c) => ({ ...c, waterData: check.waterData }));
-    else setNotice({ kind: 'error', title: 'The demo table did not load', lines: check.problems });
+    if (check.ok) {
+      editCase((c) => ({ ...c, waterData: check.waterData }));
+      setWaterSource('table');
+    } else
+      setNotice({ kind: 'error', title: 'The demo table did not load', lines: check.problems });
   } catch (e) {
     setNotice({
       kind: 'error',

@@ -6,17 +6,29 @@ import { installDebugHooks } from '../compute/debugHooks';
 import { onRecalcRequest } from '../state/recalc';
 import { toCaseFile } from '../state/editorCase';
 import { makeLatestOnly } from '../state/latestOnly';
-import { setCalc, useAppStore } from '../state/store';
+import { setCalc, useAppStore, type AppState, type WaterSource } from '../state/store';
 import type { LaminaCase } from '../io/caseSchema';
 import type { ComputeApi } from '../compute/computeApi';
 
 type CalcAnswer = ReturnType<ComputeApi['calculate']>;
 
+interface CalcInput {
+  raw: LaminaCase;
+  waterSource: WaterSource;
+}
+
+function inputOf(s: AppState): CalcInput {
+  return { raw: toCaseFile(s.history.present), waterSource: s.waterSource };
+}
+
 export function useCompute(): void {
   useEffect(() => {
     const started = new Map<number, number>();
     const runner = makeLatestOnly(
-      (raw: LaminaCase): Promise<CalcAnswer> => getComputeWorker().calculate(raw, {}),
+      ({ raw, waterSource }: CalcInput): Promise<CalcAnswer> =>
+        getComputeWorker().calculate(raw, {
+          waterSource: waterSource === 'modelled' ? 'modelled' : 'case',
+        }),
       (result, id, superseded) => {
         const t0 = started.get(id);
         started.delete(id);
@@ -42,14 +54,13 @@ export function useCompute(): void {
         for (const k of started.keys()) if (k < id - 1) started.delete(k);
       },
     );
-    runner.request(toCaseFile(useAppStore.getState().history.present));
+    runner.request(inputOf(useAppStore.getState()));
     const unsubscribe = useAppStore.subscribe((s, prev) => {
-      if (s.history.present !== prev.history.present) runner.request(toCaseFile(s.history.present));
+      if (s.history.present !== prev.history.present || s.waterSource !== prev.waterSource)
+        runner.request(inputOf(s));
     });
     // Retry after a failed calculation (e.g. the worker was lost): the same case again.
-    const stopRetry = onRecalcRequest(() =>
-      runner.request(toCaseFile(useAppStore.getState().history.present)),
-    );
+    const stopRetry = onRecalcRequest(() => runner.request(inputOf(useAppStore.getState())));
     installDebugHooks();
     return () => {
       stopRetry();

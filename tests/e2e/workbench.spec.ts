@@ -9,6 +9,14 @@ async function expectNoNaN(page: Page) {
   expect(text).not.toMatch(/\bundefined\b/);
 }
 
+/** Put the demo water table in the case and use it (from the Water data view). */
+async function useDemoTable(page: Page) {
+  await page.getByRole('tab', { name: 'Water data' }).click();
+  await page.getByTestId('load-demo-water').click();
+  await expect(page.getByTestId('source-table')).toBeChecked();
+  await page.getByRole('tab', { name: 'Depth dose' }).click();
+}
+
 test.beforeEach(async ({ page }) => {
   await page.goto('/');
   await page.evaluate(() => localStorage.clear());
@@ -96,7 +104,7 @@ test('dragging the lung’s lower boundary 2 cm deeper thickens the lung, and un
 }, testInfo) => {
   await page.getByTestId('preset').selectOption('chest');
   await expect(page.getByTestId('layer-2-thickness')).toHaveValue('8');
-  await page.getByTestId('quick-demo-water').click();
+  await useDemoTable(page);
   const rtmrCell = page.getByTestId('dose-rtmr-P1');
   await expect(rtmrCell).toHaveText(/^\d+\.\d{3}/);
   const before = await rtmrCell.innerText();
@@ -135,7 +143,7 @@ test('dragging the lung’s lower boundary 2 cm deeper thickens the lung, and un
 test('with the demo water table every method is plotted and a method can be toggled off', async ({
   page,
 }, testInfo) => {
-  await page.getByTestId('quick-demo-water').click();
+  await useDemoTable(page);
   const chart = page.getByTestId('dose-chart');
   await expect(chart.locator('path.curve[data-method="rtmr"]')).toHaveCount(1);
   const curves = await chart.locator('path.curve').count();
@@ -196,7 +204,7 @@ test('at 1280×720 every view fits the width, labels do not overlap and no NaN s
   page,
 }, testInfo) => {
   await page.setViewportSize({ width: 1280, height: 720 });
-  await page.getByTestId('quick-demo-water').click();
+  await useDemoTable(page);
   await expect(page.getByTestId('dose-chart')).toBeVisible();
   // A click on the depth ruler places a new point of interest.
   const ruler = (await page.getByTestId('depth-ruler').boundingBox())!;
@@ -245,4 +253,23 @@ test('at 1280×720 every view fits the width, labels do not overlap and no NaN s
     });
     await expectNoNaN(page);
   }
+});
+
+test('the modelled beam is the default water data; a loaded table replaces it until modelled is chosen again', async ({
+  page,
+}) => {
+  const line = page.getByTestId('water-line');
+  await expect(line).toContainText('modelled beam (6MV');
+  const cell = page.getByTestId('dose-rtmr-P1');
+  await expect(cell).toHaveText(/^\d+\.\d{3}/);
+  const modelled = await cell.innerText();
+  await useDemoTable(page);
+  await expect(line).toContainText('measured table: demo-6mv-tmr.csv');
+  await expect(cell).not.toHaveText(modelled); // the invented table differs from the model
+  await page.getByRole('tab', { name: 'Water data' }).click();
+  await page.getByTestId('source-modelled').check();
+  await page.getByRole('tab', { name: 'Depth dose' }).click();
+  await expect(line).toContainText('modelled beam (6MV');
+  await expect(cell).toHaveText(modelled);
+  await expectNoNaN(page);
 });
