@@ -2,7 +2,7 @@
 // (src/state/monteCarloStore.ts) up to date: progress and the partial result after every batch,
 // the final (or, after Cancel, the merged-so-far) result at the end. One run at a time.
 import { create } from 'zustand';
-import { startMonteCarlo, type McRunHandle } from '../../compute/mcPool';
+import { startMonteCarlo, type McPoolOptions, type McRunHandle } from '../../compute/mcPool';
 import { setMonteCarlo, useMonteCarloStore } from '../../state/monteCarloStore';
 import type { LaminaCase } from '../../io/caseSchema';
 import { monteCarloCalibration, type McCalibration } from './mcCalibration';
@@ -45,6 +45,8 @@ export interface StartRequest {
   waterSource?: string | undefined;
   /** The report's depth grid, so the MC curve lines up with the other methods. */
   depthGridCm: readonly number[];
+  /** Worker count and factory (tests run the batches in-process); browser workers by default. */
+  pool?: Pick<McPoolOptions, 'workers' | 'createWorker'>;
 }
 
 export function startRun(req: StartRequest): void {
@@ -82,7 +84,7 @@ export function startRun(req: StartRequest): void {
         if (id !== runCounter) return;
         setMonteCarlo({ progress: p, result: p.partial ?? useMonteCarloStore.getState().result });
       },
-      { depthGridCm: req.depthGridCm },
+      { ...req.pool, depthGridCm: req.depthGridCm },
     );
   } catch (e) {
     setMonteCarlo({ status: 'failed', error: messageOf(e) });
