@@ -15,6 +15,8 @@ export interface ExtraBeam {
   case: LaminaCase;
   /** Latest calculation of this beam (null while running). */
   report: CalcReport | null;
+  /** The page's water-data choice the report was calculated with. */
+  reportSource?: string | undefined;
   problems: CaseProblem[];
 }
 

@@ -47,23 +47,27 @@ export function planOf(first: LaminaCase, s: CheckState): LaminaPlan {
   return plan;
 }
 
-/** Keep every extra beam calculated (in the compute worker) whenever its case changes. */
+/**
+ * Keep every extra beam calculated (in the compute worker) whenever its case or the page's
+ * water-data choice changes, so all beams read the same kind of water data.
+ */
 export function useExtraBeamCalculations(): void {
   const extra = useCheckStore((s) => s.extraBeams);
+  const source = useAppStore((s) => s.waterSource);
   useEffect(() => {
     for (const b of extra) {
-      if (b.report || b.problems.length > 0) continue;
+      if ((b.report && b.reportSource === source) || b.problems.length > 0) continue;
       const target = b.case;
       void getComputeWorker()
-        .calculate(target, {})
+        .calculate(target, { waterSource: source === 'modelled' ? 'modelled' : 'case' })
         .then((r) => {
           const now = useCheckStore.getState().extraBeams.find((x) => x.key === b.key);
-          if (!now || now.case !== target) return; // edited or removed meanwhile
-          if (r.ok) patchExtraBeam(b.key, { report: r.report, problems: [] });
+          if (!now || now.case !== target || useAppStore.getState().waterSource !== source) return;
+          if (r.ok) patchExtraBeam(b.key, { report: r.report, reportSource: source, problems: [] });
           else patchExtraBeam(b.key, { problems: r.problems });
         });
     }
-  }, [extra]);
+  }, [extra, source]);
 }
 
 export function useCheckView(): CheckView | null {
