@@ -71,7 +71,7 @@ export function CurveChart(props: CurveChartProps) {
   const hx = hz === undefined || hz === null ? null : layout.x(hz);
   const bandTitle = new Map((props.bands ?? []).map((b) => [b.key, b.title]));
   return (
-    <figure className="chart" data-testid={props.testId}>
+    <figure className="chart" data-testid={props.testId} data-samples={props.depthCm.length}>
       <figcaption className="sr-only">{props.title}</figcaption>
       <svg
         width={props.width}

@@ -15,19 +15,31 @@ type CalcAnswer = ReturnType<ComputeApi['calculate']>;
 interface CalcInput {
   raw: LaminaCase;
   waterSource: WaterSource;
+  depthStepCm: number;
 }
 
+/** Curve resolution: full, or coarse while a boundary is being dragged (about 3× faster). */
+export const DEPTH_STEP_CM = 0.05;
+export const DRAG_DEPTH_STEP_CM = 0.2;
+
+const dragging = (s: AppState) => s.history.openKey?.startsWith('drag-') ?? false;
+
 function inputOf(s: AppState): CalcInput {
-  return { raw: toCaseFile(s.history.present), waterSource: s.waterSource };
+  return {
+    raw: toCaseFile(s.history.present),
+    waterSource: s.waterSource,
+    depthStepCm: dragging(s) ? DRAG_DEPTH_STEP_CM : DEPTH_STEP_CM,
+  };
 }
 
 export function useCompute(): void {
   useEffect(() => {
     const started = new Map<number, number>();
     const runner = makeLatestOnly(
-      ({ raw, waterSource }: CalcInput): Promise<CalcAnswer> =>
+      ({ raw, waterSource, depthStepCm }: CalcInput): Promise<CalcAnswer> =>
         getComputeWorker().calculate(raw, {
           waterSource: waterSource === 'modelled' ? 'modelled' : 'case',
+          depthStepCm,
         }),
       (result, id, superseded) => {
         const t0 = started.get(id);
@@ -56,7 +68,12 @@ export function useCompute(): void {
     );
     runner.request(inputOf(useAppStore.getState()));
     const unsubscribe = useAppStore.subscribe((s, prev) => {
-      if (s.history.present !== prev.history.present || s.waterSource !== prev.waterSource)
+      // A drag that ends asks once more at full resolution.
+      if (
+        s.history.present !== prev.history.present ||
+        s.waterSource !== prev.waterSource ||
+        (dragging(prev) && !dragging(s))
+      )
         runner.request(inputOf(s));
     });
     // Retry after a failed calculation (e.g. the worker was lost): the same case again.

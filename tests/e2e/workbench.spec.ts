@@ -122,6 +122,8 @@ test('dragging the lung’s lower boundary 2 cm deeper thickens the lung, and un
   await expect(page.getByTestId('layer-2-thickness')).toHaveValue('10');
   await expect(page.getByTestId('layer-3-thickness')).toHaveValue('7');
   await expect(rtmrCell).not.toHaveText(before);
+  // Curves are coarse (0.2 cm) while dragging and back to 0.05 cm once the drag ends: 20 cm → 401.
+  await expect(page.getByTestId('dose-chart')).toHaveAttribute('data-samples', '401');
   await page.screenshot({ path: testInfo.outputPath('after-drag.png'), fullPage: true });
 
   // Keyboard: Shift+ArrowLeft moves the focused boundary 1 cm shallower.
