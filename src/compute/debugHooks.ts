@@ -1,13 +1,16 @@
 // Hidden debug actions for end-to-end tests and support, registered only when the page address
 // carries "?debug=1": `window.__laminaDebug.killComputeWorker()` stops the compute worker now,
 // `killComputeWorkerDuringNextCalculation()` stops it right after the next request is sent (a
-// crash mid-run), `computeWorkerStarts()` counts the workers started. Nothing here runs otherwise.
+// crash mid-run), `computeWorkerStarts()` counts the workers started, `killMonteCarloWorkers()`
+// stops the workers of a running Monte Carlo run. Nothing here runs otherwise.
 import { computeWorker } from './computeClient';
 
 export interface LaminaDebug {
   killComputeWorker(): void;
   killComputeWorkerDuringNextCalculation(): void;
   computeWorkerStarts(): number;
+  /** Stops every Monte Carlo worker of the running run as if it had crashed; returns how many. */
+  killMonteCarloWorkers(): Promise<number>;
 }
 
 export function debugFlagIsSet(search: string): boolean {
@@ -25,6 +28,11 @@ export function installDebugHooks(): boolean {
         'The compute worker stopped during the calculation (debug action).',
       ),
     computeWorkerStarts: () => computeWorker.starts(),
+    // Imported on use, so the Monte Carlo pool stays out of the page's first bundle.
+    killMonteCarloWorkers: async () =>
+      (await import('./mcPool')).terminateMonteCarloWorkers(
+        'A Monte Carlo worker stopped during the run (debug action).',
+      ),
   };
   (window as unknown as { __laminaDebug?: LaminaDebug }).__laminaDebug = hooks;
   return true;

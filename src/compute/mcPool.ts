@@ -2,12 +2,12 @@
 // batches handed out one at a time, merged as they arrive, progress after each, cancel at any
 // moment (workers are terminated; `done` then resolves with what was merged, or rejects if no
 // estimate exists yet). Results do not depend on the number of workers.
-import * as Comlink from 'comlink';
 import type { McCaseInput, McOptions } from '../engine/montecarlo/monteCarloPlan';
 import type { McResult } from '../engine/montecarlo/monteCarloResult';
 import type { BatchTally, BatchTask } from '../engine/montecarlo/runBatch';
 import { McRunState, type McProgress } from './mcRunState';
 import { depthGridCm } from './calculateCase';
+import { superviseWorker } from './workerSupervisor';
 
 /** What the pool needs from a worker; `dispose` ends it. */
 export interface McWorkerHandle {
@@ -29,17 +29,33 @@ export interface McRunHandle {
   done: Promise<McResult>;
 }
 
+/** Live browser Monte Carlo workers, for the ?debug=1 hooks (see ./debugHooks). */
+const liveBrowserWorkers = new Set<{ terminate(reason?: string): void }>();
+
+/** Debug aid: stop every live Monte Carlo worker as if it had crashed; returns how many. */
+export function terminateMonteCarloWorkers(reason: string): number {
+  const n = liveBrowserWorkers.size;
+  for (const w of [...liveBrowserWorkers]) w.terminate(reason);
+  return n;
+}
+
 function browserWorker(): McWorkerHandle {
-  const worker = new Worker(new URL('../../workers/mc.worker.ts', import.meta.url), {
-    type: 'module',
-    name: 'lamina-mc',
-  });
-  const remote = Comlink.wrap<{ runBatch(task: BatchTask): BatchTally }>(worker);
+  // Supervised: a worker that crashes rejects its batch (the run then fails with that message)
+  // instead of leaving the run waiting forever.
+  const supervised = superviseWorker<{ runBatch(task: BatchTask): BatchTally }>(
+    () =>
+      new Worker(new URL('../../workers/mc.worker.ts', import.meta.url), {
+        type: 'module',
+        name: 'lamina-mc',
+      }),
+    'Monte Carlo',
+  );
+  liveBrowserWorkers.add(supervised);
   return {
-    runBatch: (task) => remote.runBatch(task),
+    runBatch: (task) => supervised.api().runBatch(task),
     dispose: () => {
-      remote[Comlink.releaseProxy]();
-      worker.terminate();
+      liveBrowserWorkers.delete(supervised);
+      supervised.terminate();
     },
   };
 }

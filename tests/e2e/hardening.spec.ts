@@ -12,6 +12,7 @@ interface DebugHooks {
   killComputeWorker(): void;
   killComputeWorkerDuringNextCalculation(): void;
   computeWorkerStarts(): number;
+  killMonteCarloWorkers(): Promise<number>;
 }
 type DebugWindow = Window & { __laminaDebug?: DebugHooks; __pwned?: unknown };
 
@@ -246,4 +247,33 @@ test('a file far too large for a case is refused without reading it, and the cas
   await expect(page.getByTestId('file-notice')).toContainText('huge.json was not opened');
   await expect(page.getByTestId('file-notice')).toContainText('too large for a case file');
   await expect(page.getByTestId('layer-3')).toBeVisible();
+});
+
+test('Monte Carlo workers that die mid-run end the run with a message; the page stays usable', async ({
+  page,
+}, testInfo) => {
+  test.setTimeout(120_000);
+  await freshPage(page, '/?debug=1');
+  await page.getByRole('tab', { name: 'Monte Carlo run' }).click();
+  await page.getByTestId('mc-preset-5000000').click();
+  await page.getByTestId('mc-start').click();
+  // Wait for the first estimate: the workers are then certainly busy with batches.
+  await expect(page.getByTestId('mc-sigma-P1')).toHaveText(/^\d+\.\d+ %$/, { timeout: 60_000 });
+  const killed = await page.evaluate(() =>
+    (window as DebugWindow).__laminaDebug!.killMonteCarloWorkers(),
+  );
+  expect(killed).toBeGreaterThan(0);
+  await expect(page.getByTestId('mc-status')).toContainText('Failed.', { timeout: 5_000 });
+  await expect(page.getByTestId('mc-status')).toContainText(
+    'A Monte Carlo worker stopped during the run',
+  );
+  await expect(page.getByTestId('mc-start')).toBeEnabled();
+  await page.screenshot({ path: testInfo.outputPath('mc-worker-lost.png'), fullPage: true });
+  // The rest of the page carries on: an edit is calculated by the compute worker.
+  await page.getByTestId('layer-1-thickness').fill('5');
+  await page.getByRole('tab', { name: 'Depth dose' }).click();
+  await expect(page.getByTestId('calc-status')).toContainText('calculated in');
+  await expect(page.getByRole('alert').filter({ hasText: 'The calculation failed' })).toHaveCount(
+    0,
+  );
 });
