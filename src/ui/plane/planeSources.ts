@@ -22,21 +22,43 @@ export interface PlaneSource {
   reason: string | null;
 }
 
-/** What a dose plane depends on: the beam and the slabs, in a stable order. */
-export function planeKeyOf(c: Pick<LaminaCase, 'beam' | 'layers'>): string {
-  return JSON.stringify({
-    beam: c.beam,
-    layers: c.layers.map((l) => [l.materialId, l.thicknessCm, l.densityGPerCm3 ?? null]),
-  });
+type LayerLike = { materialId: string; thicknessCm: number; densityGPerCm3?: number } | unknown[];
+
+/** A layer as [material, thickness, density or null] (the form run keys already use). */
+function layerTuple(l: LayerLike): unknown[] {
+  if (Array.isArray(l)) return [l[0], l[1], l[2] ?? null];
+  return [l.materialId, l.thicknessCm, l.densityGPerCm3 ?? null];
 }
 
-/** True when a run started for `caseKey` (the serialised case) has the beam and slabs of `c`. */
+/** A copy with object keys sorted, so key order does not matter in a comparison. */
+function sortedKeys(v: unknown): unknown {
+  if (Array.isArray(v)) return v.map(sortedKeys);
+  if (v === null || typeof v !== 'object') return v;
+  const o = v as Record<string, unknown>;
+  return Object.fromEntries(
+    Object.keys(o)
+      .sort()
+      .map((k) => [k, sortedKeys(o[k])]),
+  );
+}
+
+/** What a dose plane depends on: the beam and the slabs, in a stable order. */
+export function planeKeyOf(c: { beam: unknown; layers: readonly LayerLike[] }): string {
+  return JSON.stringify({ beam: sortedKeys(c.beam), layers: c.layers.map(layerTuple) });
+}
+
+/**
+ * True when a run started for `caseKey` (a JSON key holding at least the beam and the layers,
+ * as objects or as [material, thickness, density] tuples) has the beam and slabs of `c`. Points,
+ * names and notes do not change a plane.
+ */
 export function runMatchesCase(caseKey: string | null, c: LaminaCase): boolean {
   if (caseKey === null) return false;
   try {
-    const parsed = JSON.parse(caseKey) as Partial<LaminaCase> | null;
+    const parsed = JSON.parse(caseKey) as { beam?: unknown; layers?: unknown } | null;
     if (!parsed || !parsed.beam || !Array.isArray(parsed.layers)) return false;
-    return planeKeyOf(parsed as LaminaCase) === planeKeyOf(c);
+    const layers = parsed.layers as LayerLike[];
+    return planeKeyOf({ beam: parsed.beam, layers }) === planeKeyOf(c);
   } catch {
     return false;
   }
