@@ -1,6 +1,6 @@
 // The page: header with case actions, the cautions, the case editor on the left and the
 // comparison views on the right, all reading one store.
-import { useEffect } from 'react';
+import { useEffect, type KeyboardEvent } from 'react';
 import { CAUTIONS } from '../compute/calculateCase';
 import { setNotice, setTab, setTheme, useAppStore, type Theme, type ViewTab } from '../state/store';
 import { BeamPanel } from './BeamPanel';
@@ -115,6 +115,21 @@ function CaseName() {
   );
 }
 
+/** Arrow keys, Home and End move between the view tabs (and show the view). */
+function onTabKey(e: KeyboardEvent<HTMLButtonElement>) {
+  const i = TABS.findIndex((t) => `tab-${t.id}` === e.currentTarget.id);
+  let next = -1;
+  if (e.key === 'ArrowRight') next = (i + 1) % TABS.length;
+  else if (e.key === 'ArrowLeft') next = (i - 1 + TABS.length) % TABS.length;
+  else if (e.key === 'Home') next = 0;
+  else if (e.key === 'End') next = TABS.length - 1;
+  const t = TABS[next];
+  if (!t) return;
+  e.preventDefault();
+  setTab(t.id);
+  document.getElementById(`tab-${t.id}`)?.focus();
+}
+
 function Workbench() {
   const tab = useAppStore((s) => s.tab);
   // The latest calculation plus the page's Monte Carlo curve while its run matches the case.
@@ -129,15 +144,25 @@ function Workbench() {
             key={t.id}
             role="tab"
             type="button"
+            id={`tab-${t.id}`}
             aria-selected={tab === t.id}
+            aria-controls="view-panel"
+            tabIndex={tab === t.id ? 0 : -1}
             className={tab === t.id ? 'tab active' : 'tab'}
             onClick={() => setTab(t.id)}
+            onKeyDown={onTabKey}
           >
             {t.label}
           </button>
         ))}
       </div>
-      <div role="tabpanel" className="tab-panel" ref={ref}>
+      <div
+        role="tabpanel"
+        id="view-panel"
+        aria-labelledby={`tab-${tab}`}
+        className="tab-panel"
+        ref={ref}
+      >
         {showsDepth ? (
           <>
             <SlabStrip width={width} />

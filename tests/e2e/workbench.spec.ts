@@ -33,6 +33,15 @@ test('shows the title, the cautions and the slab strip of the starting case', as
   await expect(page.getByTestId('slab-strip')).toBeVisible();
   await expect(page.getByTestId('calc-status')).toContainText('calculated in');
   await page.screenshot({ path: testInfo.outputPath('start.png'), fullPage: true });
+  // The view tabs are keyboard reachable: arrow keys move between them.
+  await page.getByRole('tab', { name: 'Depth dose' }).focus();
+  await page.keyboard.press('ArrowRight');
+  await expect(page.getByRole('tab', { name: 'Correction factors' })).toHaveAttribute(
+    'aria-selected',
+    'true',
+  );
+  await expect(page.getByRole('tab', { name: 'Correction factors' })).toBeFocused();
+  await expect(page.getByTestId('radiological-chart')).toBeVisible();
   await expectNoNaN(page);
 });
 
