@@ -2,6 +2,8 @@
 import type { PlanCheck } from '../engine/check/planCheck';
 import { VERDICT_TEXT } from '../io/report/reportModel';
 import {
+  beamVerdictHeaders,
+  beamVerdictRows,
   pointTableRows,
   POINT_TABLE_HEADERS,
   totalTableRows,
@@ -32,9 +34,8 @@ export function formatCheck(check: PlanCheck): string {
     out.push(table(TOTAL_TABLE_HEADERS, totalTableRows(check)));
   }
   out.push('');
-  out.push(
-    `Verdicts by method: ${check.methods.map((m) => `${m.id} ${check.verdictByMethod[m.id] ?? 'none'}`).join(', ')}`,
-  );
+  out.push('Verdict per beam and method');
+  out.push(table(beamVerdictHeaders(check), beamVerdictRows(check)));
   const decisive = check.methods.find((m) => m.id === check.decisiveMethodId);
   out.push(
     `Check verdict (${decisive ? decisive.id : 'no method'}): ${VERDICT_TEXT[check.verdict]}`,

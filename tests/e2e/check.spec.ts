@@ -112,6 +112,7 @@ test('a two-beam plan opened from a file shows the total, and travels through a 
     .setInputFiles('public/cases/opposed-pair-chest-6mv.plan.json');
   await expect(page.getByTestId('check-total-table')).toBeVisible();
   await expect(page.getByTestId('check-verdict')).toContainText('Within tolerance');
+  await expect(page.getByTestId('check-beam-verdicts').locator('tbody tr')).toHaveCount(3); // AP, PA, all
   const totals = await page
     .getByTestId('check-total-table')
     .locator('tbody tr')

@@ -8,6 +8,8 @@ import type { Verdict } from '../../engine/check/tolerance';
 import type { LaminaPlan } from '../planFile';
 import { depthDoseFigure, type ReportFigure } from './reportFigure';
 import {
+  beamVerdictHeaders,
+  beamVerdictRows,
   pointTableRows,
   POINT_TABLE_HEADERS,
   totalTableRows,
@@ -168,6 +170,12 @@ export function buildReportModel(input: ReportInput): ReportModel {
       text: `Prescription: ${check.prescription.doseCGy} cGy at point ${check.prescription.pointId} (all beams).`,
     });
   blocks.push({ kind: 'paragraph', text: checkSummary(check) });
+  blocks.push({
+    kind: 'table',
+    caption: 'Verdict per beam and method',
+    headers: beamVerdictHeaders(check),
+    rows: beamVerdictRows(check),
+  });
   blocks.push({ kind: 'heading', text: 'Point check per beam' });
   blocks.push({ kind: 'table', headers: POINT_TABLE_HEADERS, rows: pointTableRows(check) });
   if (check.beams.length > 1) {

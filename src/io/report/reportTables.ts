@@ -70,3 +70,21 @@ export function totalTableRows(check: PlanCheck): string[][] {
     ]),
   );
 }
+
+/** One row per beam (and "total" for a multi-beam plan): the verdict of every method. */
+export function beamVerdictHeaders(check: PlanCheck): string[] {
+  return ['beam', ...check.methods.map((m) => m.id)];
+}
+
+export function beamVerdictRows(check: PlanCheck): string[][] {
+  const rows = check.beams.map((b) => [
+    b.id,
+    ...check.methods.map((m) => b.verdictByMethod[m.id] ?? 'none'),
+  ]);
+  if (check.beams.length > 1)
+    rows.push([
+      'all (with totals)',
+      ...check.methods.map((m) => check.verdictByMethod[m.id] ?? 'none'),
+    ]);
+  return rows;
+}

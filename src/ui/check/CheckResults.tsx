@@ -4,6 +4,8 @@ import type { PlanCheck } from '../../engine/check/planCheck';
 import type { Verdict } from '../../engine/check/tolerance';
 import { VERDICT_TEXT } from '../../io/report/reportModel';
 import {
+  beamVerdictHeaders,
+  beamVerdictRows,
   pointTableRows,
   POINT_TABLE_HEADERS,
   totalTableRows,
@@ -53,6 +55,36 @@ function RowsTable({
   );
 }
 
+function VerdictGrid({ check }: { check: PlanCheck }) {
+  const headers = beamVerdictHeaders(check);
+  return (
+    <div className="table-wrap">
+      <table className="check-table results" data-testid="check-beam-verdicts">
+        <caption>Verdict per beam and method</caption>
+        <thead>
+          <tr>
+            {headers.map((h, k) => (
+              <th key={h} scope="col" title={k > 0 ? check.methods[k - 1]?.label : undefined}>
+                {h}
+              </th>
+            ))}
+          </tr>
+        </thead>
+        <tbody>
+          {beamVerdictRows(check).map(([beam, ...vs]) => (
+            <tr key={beam}>
+              <th scope="row">{beam}</th>
+              {vs.map((v, k) => (
+                <VerdictCell key={k} v={v} />
+              ))}
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}
+
 export function VerdictBanner({ check }: { check: PlanCheck }) {
   const m = check.methods.find((x) => x.id === check.decisiveMethodId);
   const v: Verdict = check.verdict;
@@ -74,6 +106,7 @@ export function CheckResults({ check }: { check: PlanCheck }) {
     );
   return (
     <>
+      <VerdictGrid check={check} />
       <RowsTable
         caption="Per beam: dose per MU, MU for the dose, and differences from the planning system"
         headers={POINT_TABLE_HEADERS}

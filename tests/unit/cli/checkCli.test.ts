@@ -78,6 +78,10 @@ describe('calc CLI: point check', () => {
     expect(text).toMatch(/=== Beam AP — anterior ===/);
     expect(text).toMatch(/Total over beams/);
     expect(text).toMatch(/Prescription: 200 cGy at iso/);
+    // Per-beam verdicts: the uncorrected water calculation is about 10 % off through lung.
+    expect(text).toMatch(/beam\s+water\s+rtmr/);
+    expect(text).toMatch(/AP\s+fail\s+pass/);
+    expect(text).toMatch(/all \(with totals\)\s+fail\s+pass/);
   });
 
   it('batchRows(...) gives one row per file and batchExitCode 0 / 1 for pass / any fail', () => {
