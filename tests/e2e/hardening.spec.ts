@@ -277,3 +277,21 @@ test('Monte Carlo workers that die mid-run end the run with a message; the page 
     0,
   );
 });
+
+test('a check beam whose calculation is lost with the worker says so, and Retry calculates it', async ({
+  page,
+}) => {
+  await freshPage(page, '/?debug=1');
+  await page.getByRole('tab', { name: 'Point check & report' }).click();
+  await expect(page.getByTestId('check-beams')).toBeVisible();
+  await page.evaluate(() =>
+    (window as DebugWindow).__laminaDebug?.killComputeWorkerDuringNextCalculation(),
+  );
+  await page.getByTestId('check-add-beam').setInputFiles('public/cases/water-reference-6mv.json');
+  const second = page.getByTestId('check-beams').locator('tbody tr').nth(1);
+  await expect(second).toContainText('The compute worker stopped during the calculation');
+  await second.getByTestId('calc-retry').click();
+  await expect(second).toContainText('calculated');
+  await expect(second).not.toContainText('stopped');
+  await expect(page.getByTestId('check-total-table')).toBeVisible();
+});

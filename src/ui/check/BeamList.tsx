@@ -3,6 +3,8 @@
 import { addBeamsFromFile } from './planActions';
 import { patchExtraBeam, patchFirstBeam, removeExtraBeam, useCheckStore } from './checkStore';
 import { NumInput } from './NumInput';
+import { RetryButton } from '../RetryButton';
+import { WORKER_PROBLEM_PATH } from './useCheck';
 
 export function BeamList() {
   const first = useCheckStore((s) => s.firstBeam);
@@ -69,6 +71,7 @@ export function BeamList() {
                   : b.report
                     ? 'calculated'
                     : 'calculating…'}
+                {b.problems.some((p) => p.path === WORKER_PROBLEM_PATH) ? <RetryButton /> : null}
               </td>
               <td>
                 <button type="button" onClick={() => removeExtraBeam(b.key)}>

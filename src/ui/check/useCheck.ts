@@ -9,6 +9,7 @@ import type { LaminaCase } from '../../io/caseSchema';
 import { PLAN_FORMAT, PLAN_VERSION } from '../../io/planSchema';
 import type { LaminaPlan } from '../../io/planFile';
 import { toCaseFile } from '../../state/editorCase';
+import { onRecalcRequest } from '../../state/recalc';
 import { useAppStore } from '../../state/store';
 import { patchExtraBeam, useCheckStore, type CheckState } from './checkStore';
 
@@ -65,10 +66,27 @@ export function useExtraBeamCalculations(): void {
           if (!now || now.case !== target || useAppStore.getState().waterSource !== source) return;
           if (r.ok) patchExtraBeam(b.key, { report: r.report, reportSource: source, problems: [] });
           else patchExtraBeam(b.key, { problems: r.problems });
+        })
+        // The worker was lost (it is replaced on the next call): say so; Retry calculates again.
+        .catch((e: unknown) => {
+          const message = e instanceof Error ? e.message : String(e);
+          patchExtraBeam(b.key, { problems: [{ path: WORKER_PROBLEM_PATH, message }] });
         });
     }
   }, [extra, source]);
+  useEffect(
+    () =>
+      onRecalcRequest(() => {
+        for (const b of useCheckStore.getState().extraBeams)
+          if (b.problems.some((p) => p.path === WORKER_PROBLEM_PATH))
+            patchExtraBeam(b.key, { problems: [] });
+      }),
+    [],
+  );
 }
+
+/** Problem path of a beam whose calculation was lost with the compute worker. */
+export const WORKER_PROBLEM_PATH = '(calculation)';
 
 export function useCheckView(): CheckView | null {
   const present = useAppStore((s) => s.history.present);
