@@ -77,6 +77,19 @@ test('a long run is cancelled mid-way and the page responds to an edit at once',
   await page.getByTestId('mc-start').click();
   // Wait for the first estimate, so Cancel keeps a partial result.
   await expect(page.getByTestId('mc-sigma-P1')).toHaveText(/^\d+\.\d+ %$/, { timeout: 60_000 });
+  await expect(page.getByTestId('mc-remaining')).toHaveText(/\d+(\.\d)? s|min/);
+  await page.screenshot({ path: testInfo.outputPath('mc-running.png'), fullPage: true });
+  // The curve keeps drawing as batches arrive: its path changes while the run goes on.
+  await page.getByRole('tab', { name: 'Depth dose' }).click();
+  const mcPath = page.getByTestId('dose-chart').locator('path[data-method="monte-carlo"]');
+  await expect(mcPath).toHaveCount(1);
+  const first = await mcPath.getAttribute('d');
+  await expect.poll(() => mcPath.getAttribute('d'), { timeout: 30_000 }).not.toBe(first);
+  await page
+    .getByTestId('dose-chart')
+    .screenshot({ path: testInfo.outputPath('mc-live-dose-chart.png') });
+  await openMcTab(page);
+  await expect(page.getByTestId('mc-status')).toContainText('Running');
   await expect(page.getByTestId('mc-cancel')).toBeEnabled();
   await page.getByTestId('mc-cancel').click();
   await expect(page.getByTestId('mc-status')).toContainText('Cancelled', { timeout: 5_000 });

@@ -3,7 +3,14 @@
 import { useEffect, useState } from 'react';
 import type { McProgress } from '../../compute/mcRunState';
 import type { McResult } from '../../engine/montecarlo/monteCarloResult';
-import { formatDoseSigma, formatElapsed, fractionDone, groupDigits } from './mcRunModel';
+import {
+  formatDoseSigma,
+  formatElapsed,
+  fractionDone,
+  groupDigits,
+  projectedRelativeSigma,
+  remainingMs,
+} from './mcRunModel';
 
 /** Wall-clock time, refreshed while `ticking`. */
 function useNow(ticking: boolean): number {
@@ -31,6 +38,12 @@ export function McProgressView({
   const elapsedMs =
     running && startedAtMs !== null ? now - startedAtMs : (progress?.elapsedMs ?? null);
   const fraction = progress ? fractionDone(progress.tasksDone, progress.totalTasks) : 0;
+  const left = running && elapsedMs !== null ? remainingMs(elapsedMs, fraction) : null;
+  const projected = (rel: number | null): string => {
+    if (rel === null || !progress) return '—';
+    const p = projectedRelativeSigma(rel, progress.histories, progress.totalHistories);
+    return p === null ? '—' : `${(100 * p).toFixed(2)} %`;
+  };
   const cfById = new Map(result?.method.points.map((p) => [p.id, p.cf]) ?? []);
   return (
     <div className="mc-progress">
@@ -54,6 +67,12 @@ export function McProgressView({
         <dd>{progress ? `${progress.tasksDone} of ${progress.totalTasks}` : '—'}</dd>
         <dt>Elapsed</dt>
         <dd data-testid="mc-elapsed">{elapsedMs === null ? '—' : formatElapsed(elapsedMs)}</dd>
+        {running ? (
+          <>
+            <dt>Remaining (estimate)</dt>
+            <dd data-testid="mc-remaining">{left === null ? '—' : formatElapsed(left)}</dd>
+          </>
+        ) : null}
       </dl>
       {progress && progress.points.length > 0 ? (
         <div className="table-wrap">
@@ -68,6 +87,7 @@ export function McProgressView({
                 <th scope="col">Dose per MU ± 1σ</th>
                 <th scope="col">1σ (%)</th>
                 <th scope="col">CF</th>
+                {running ? <th scope="col">1σ at the end (projected, σ ∝ 1/√N)</th> : null}
               </tr>
             </thead>
             <tbody>
@@ -84,6 +104,7 @@ export function McProgressView({
                       {f.relative}
                     </td>
                     <td className="num">{cf === null || cf === undefined ? '—' : cf.toFixed(3)}</td>
+                    {running ? <td className="num">{projected(p.relativeSigma)}</td> : null}
                   </tr>
                 );
               })}

@@ -99,3 +99,23 @@ export function fractionDone(tasksDone: number, totalTasks: number): number {
   if (!(totalTasks > 0)) return 0;
   return Math.min(1, Math.max(0, tasksDone / totalTasks));
 }
+
+/** Time still needed at the rate so far (ms), or null before any batch is back. */
+export function remainingMs(elapsedMs: number, fraction: number): number | null {
+  if (!(fraction > 0) || !Number.isFinite(elapsedMs)) return null;
+  return (elapsedMs * (1 - Math.min(1, fraction))) / fraction;
+}
+
+/**
+ * The relative 1σ the finished run should reach: statistical uncertainty falls as 1/√N, so
+ * σ_end = σ_now · √(N_now / N_planned).
+ */
+export function projectedRelativeSigma(
+  relativeSigma: number,
+  historiesDone: number,
+  historiesPlanned: number,
+): number | null {
+  if (!(historiesDone > 0) || !(historiesPlanned > 0) || !Number.isFinite(relativeSigma))
+    return null;
+  return relativeSigma * Math.sqrt(Math.min(historiesDone, historiesPlanned) / historiesPlanned);
+}

@@ -12,7 +12,10 @@ import {
   monteCarloCaseKey,
   parseHistories,
   parseSeed,
+  projectedRelativeSigma,
+  remainingMs,
 } from '../../../src/ui/montecarlo/mcRunModel';
+import { expectRelClose } from '../../helpers/expectClose';
 import { fromCaseFile } from '../../../src/state/editorCase';
 import { PRESETS } from '../../../src/state/presets';
 
@@ -124,5 +127,21 @@ describe('monteCarloCaseKey', () => {
     expect(isRunCurrent(null, 'k')).toBe(false);
     expect(isRunCurrent('a', 'b')).toBe(false);
     expect(isRunCurrent('k', 'k')).toBe(true);
+  });
+});
+
+describe('run outlook', () => {
+  it('remainingMs(...) extrapolates the time so far and is null before any batch', () => {
+    // A quarter done in 10 s: three quarters left at the same rate, 30 s.
+    expect(remainingMs(10_000, 0.25)).toBe(30_000);
+    expect(remainingMs(10_000, 1)).toBe(0);
+    expect(remainingMs(10_000, 0)).toBeNull();
+  });
+
+  it('projectedRelativeSigma(...) scales the 1σ by √(N_now / N_planned)', () => {
+    // 2 % after 1/4 of the histories → 1 % at the end (σ ∝ 1/√N).
+    expectRelClose(projectedRelativeSigma(0.02, 250_000, 1_000_000)!, 0.01, 1e-12);
+    expect(projectedRelativeSigma(0.02, 1_000_000, 1_000_000)).toBe(0.02);
+    expect(projectedRelativeSigma(0.02, 0, 1_000_000)).toBeNull();
   });
 });
