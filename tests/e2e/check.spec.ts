@@ -76,6 +76,8 @@ test('entering the planning dose and MU gives a verdict; print view and PDF reco
   const pdf = readFileSync(await download.path()).toString('latin1');
   expect(pdf.startsWith('%PDF-')).toBe(true);
   expect(pdf).toContain('(Point check per beam) Tj');
+  // The factor chain of the water data the page used (the modelled beam by default).
+  expect(pdf).toMatch(/\(Water chain at P1: D\/MU = /);
   expect(pdf).toContain(`(${(checkMu * 1.1).toFixed(1)}) Tj`);
 
   // The figure as SVG and PNG files.

@@ -4,6 +4,7 @@ import { useEffect, useMemo } from 'react';
 import type { CalcReport } from '../../compute/calculateCase';
 import { checkInputOf, waterChainsOf, type PlanReport } from '../../compute/calculatePlan';
 import { getComputeWorker } from '../../compute/computeClient';
+import { modelledWaterData } from '../../engine/beam/modelledBeam';
 import { checkPlan, type PlanCheck } from '../../engine/check/planCheck';
 import type { LaminaCase } from '../../io/caseSchema';
 import { PLAN_FORMAT, PLAN_VERSION } from '../../io/planSchema';
@@ -122,8 +123,12 @@ export function useCheckView(): CheckView | null {
   }, [present, report, s]);
 }
 
-/** The plan report the record is built from (water factor chains computed here, on demand). */
+/**
+ * The plan report the record is built from. The water factor chains are computed here from the
+ * same water data the page's calculation used (the modelled beam, or the case's table).
+ */
 export function planReportOf(view: CheckView): PlanReport {
+  const modelled = useAppStore.getState().waterSource === 'modelled';
   return {
     format: 'lamina.plancalc',
     version: 1,
@@ -133,7 +138,10 @@ export function planReportOf(view: CheckView): PlanReport {
       label: b.label,
       weight: b.weight,
       report: b.report,
-      waterChains: waterChainsOf(b.case, {}),
+      waterChains: waterChainsOf(
+        b.case,
+        modelled ? { waterData: modelledWaterData(b.case.beam.energy) } : {},
+      ),
     })),
     check: view.check,
   };
