@@ -39,6 +39,9 @@ test('a small run from a preset shows progress, a live 1σ and its curve in both
   expect(rel).toBeGreaterThan(0);
   expect(rel).toBeLessThan(10);
   await page.screenshot({ path: testInfo.outputPath('mc-finished.png'), fullPage: true });
+  await page.getByLabel('Theme').selectOption('dark');
+  await page.screenshot({ path: testInfo.outputPath('mc-finished-dark.png'), fullPage: true });
+  await page.getByLabel('Theme').selectOption('auto');
 
   await page.getByRole('tab', { name: 'Depth dose' }).click();
   const chart = page.getByTestId('dose-chart');

@@ -85,12 +85,14 @@ export function MonteCarloPanel() {
         </p>
       ) : null}
       {mc.status !== 'idle' ? (
-        <McProgressView
-          progress={mc.progress}
-          result={mc.result}
-          running={running}
-          startedAtMs={run?.startedAtMs ?? null}
-        />
+        <div className={stale ? 'mc-stale-values' : undefined}>
+          <McProgressView
+            progress={mc.progress}
+            result={mc.result}
+            running={running}
+            startedAtMs={run?.startedAtMs ?? null}
+          />
+        </div>
       ) : null}
       {mc.result && !stale ? (
         <p className="hint">
