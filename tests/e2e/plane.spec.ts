@@ -82,8 +82,68 @@ test('an edit shows "updating…" and the map follows the new slabs', async ({ p
     '[data-testid="plane-map"] g.isodose[data-level="50"] path.isodose-line',
   );
   const before = await d50.getAttribute('d');
+  // Record every text the status shows: a new plane may take only a few hundred ms.
+  await page.evaluate(() => {
+    const el = document.querySelector('[data-testid="plane-status"]');
+    const seen: string[] = [];
+    (window as unknown as { __planeStatus: string[] }).__planeStatus = seen;
+    if (el)
+      new MutationObserver(() => seen.push(el.textContent ?? '')).observe(el, {
+        childList: true,
+        characterData: true,
+        subtree: true,
+      });
+  });
   await page.getByTestId('layer-2-thickness').fill('4');
+  await expect
+    .poll(() =>
+      page.evaluate(() => (window as unknown as { __planeStatus: string[] }).__planeStatus),
+    )
+    .toContain('updating…');
   await expect(page.getByTestId('plane-status')).toHaveText('up to date');
   await expect.poll(async () => d50.getAttribute('d')).not.toEqual(before);
+  await expectNoNaN(page);
+});
+
+test('a Monte Carlo run adds its plane, its profile and the superposition − Monte Carlo difference', async ({
+  page,
+}, testInfo) => {
+  test.setTimeout(150_000);
+  await openPlane(page, 'chest');
+  await page.getByRole('tab', { name: 'Monte Carlo run' }).click();
+  await page.getByTestId('mc-preset-50000').click();
+  await page.getByTestId('mc-start').click();
+  await expect(page.getByTestId('mc-status')).toContainText('Finished', { timeout: 120_000 });
+  await page.getByRole('tab', { name: 'Dose plane' }).click();
+  await expect(page.getByTestId('plane-status')).toHaveText('up to date');
+
+  await page.getByTestId('plane-method').selectOption('monte-carlo');
+  const map = page.getByTestId('plane-map');
+  await expect(map).toBeVisible();
+  await expect(map.locator('g.isodose path.isodose-line')).not.toHaveCount(0);
+  await expect(
+    page.getByTestId('plane-profile').locator('path[data-method="monte-carlo"]'),
+  ).toHaveCount(1);
+
+  await page.getByTestId('diff-a').selectOption('superposition');
+  await page.getByTestId('diff-b').selectOption('monte-carlo');
+  await expect(page.getByTestId('plane-diff')).toBeVisible();
+  await expect(page.getByTestId('plane-diff-note')).toContainText(
+    'resampled (bilinear) onto the Monte Carlo grid',
+  );
+  // Hovering the difference map reads out a signed percentage.
+  const frame = page.getByTestId('plane-diff').locator('rect.plane-frame');
+  await frame.scrollIntoViewIfNeeded();
+  const box = await frame.boundingBox();
+  if (!box) throw new Error('no difference frame');
+  await page.mouse.move(box.x + box.width * 0.6, box.y + box.height / 2);
+  await expect(page.getByTestId('plane-diff-readout')).toContainText(
+    /x -?0\.\d\d cm: [+−]\d+\.\d %/,
+  );
+  await page.screenshot({ path: testInfo.outputPath('plane-mc.png'), fullPage: true });
+
+  // Another slab stack: the run no longer belongs to the case, and the page says so.
+  await page.getByTestId('layer-2-thickness').fill('5');
+  await expect(page.getByTestId('plane-diff-missing')).toContainText('another beam or slab stack');
   await expectNoNaN(page);
 });

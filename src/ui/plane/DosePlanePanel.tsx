@@ -203,6 +203,11 @@ export function DosePlanePanel() {
               isodose={isodose}
               markerDepthCm={depthCm}
               onPickDepth={pickDepth}
+              points={present.points}
+              formatValue={(v) => {
+                const n = norm.get(mapId) ?? NaN;
+                return `${v.toFixed(3)} cGy/MU (${((100 * v) / n).toFixed(1)} % of CAX max)`;
+              }}
             />
             <p className="plane-note" data-testid="plane-isodose-note">
               Isodose lines at {ISODOSE_PERCENTS.join(', ')} % of the central-axis maximum of{' '}
@@ -295,6 +300,8 @@ export function DosePlanePanel() {
               bar={{ domain: [-diff.lim, diff.lim], label: `% of ${b.label} CAX max` }}
               markerDepthCm={depthCm}
               onPickDepth={pickDepth}
+              points={present.points}
+              formatValue={(v) => `${v >= 0 ? '+' : '−'}${Math.abs(v).toFixed(1)} %`}
             />
             <p className="plane-note" data-testid="plane-diff-note">
               {a.label} − {b.label}: largest difference {diff.maxAbs.toFixed(1)} % of the {b.label}{' '}

@@ -1,10 +1,10 @@
 // A dose plane drawn as a colour map (thin renderer over doseMapLayout): the raster, layer
 // interfaces across, optional isodose lines with their labels, axes in cm, a marker at the
 // profile depth (a click on the map moves it) and a horizontal colour bar underneath.
-import { useId, useMemo, type PointerEvent } from 'react';
+import { useId, useMemo, useState, type PointerEvent } from 'react';
 import { colourBar, doseMapLayout, parseRgb, planeRaster } from '../../plots/doseMapLayout';
 import { indexMapper, isodoseLines } from '../../plots/isodose';
-import type { PlaneGrid } from '../../plots/planeGrid';
+import { bilinearAt, type PlaneGrid } from '../../plots/planeGrid';
 import { SIDE_MARGIN } from '../frame';
 
 export interface PlaneMapProps {
@@ -24,6 +24,10 @@ export interface PlaneMapProps {
   isodose?: { normDose: number; percents: readonly number[] };
   markerDepthCm?: number;
   onPickDepth?: (depthCm: number) => void;
+  /** Points of interest, marked on the central axis. */
+  points?: readonly { id: string; depthCm: number }[];
+  /** Readout of a value under the pointer, e.g. "0.812 cGy/MU". */
+  formatValue: (v: number) => string;
 }
 
 const BAR_H = 10;
@@ -89,6 +93,22 @@ export function PlaneMap(props: PlaneMapProps) {
     width: Math.min(320, plot.width),
     height: BAR_H,
   });
+  const [hover, setHover] = useState<{ x: number; z: number } | null>(null);
+  const onMove = (e: PointerEvent<SVGRectElement>) => {
+    const box = e.currentTarget.ownerSVGElement?.getBoundingClientRect();
+    setHover({
+      z: layout.x.invert(e.clientX - (box?.left ?? 0)),
+      x: layout.y.invert(e.clientY - (box?.top ?? 0)),
+    });
+  };
+  const g = props.grid;
+  const inside =
+    hover !== null &&
+    hover.z >= (g.depthCm[0] ?? 0) &&
+    hover.z <= (g.depthCm[g.depthCm.length - 1] ?? 0) &&
+    hover.x >= (g.xCm[0] ?? 0) &&
+    hover.x <= (g.xCm[g.xCm.length - 1] ?? 0);
+  const hoverValue = inside ? bilinearAt(g, hover.x, hover.z) : NaN;
   const onClick = (e: PointerEvent<SVGRectElement>) => {
     if (!props.onPickDepth) return;
     const box = e.currentTarget.ownerSVGElement?.getBoundingClientRect();
@@ -111,6 +131,15 @@ export function PlaneMap(props: PlaneMapProps) {
             ))}
           </linearGradient>
         </defs>
+        <rect
+          x={plot.left}
+          y={plot.top}
+          width={plot.width}
+          height={plot.height}
+          className="plane-nodata"
+        >
+          <title>No dose values here</title>
+        </rect>
         <g clipPath={`url(#clip-${clipId})`}>
           <image
             href={url}
@@ -154,6 +183,16 @@ export function PlaneMap(props: PlaneMapProps) {
             </text>
           ) : null,
         )}
+        {(props.points ?? []).map((p) => {
+          const px = Math.round(layout.x(Math.min(p.depthCm, props.maxDepthCm)) * 10) / 10;
+          const py = Math.round(layout.y(0) * 10) / 10;
+          return (
+            <g key={p.id} className="plane-poi" pointerEvents="none">
+              <path d={`M${px},${py} l-4,-7 h8 z`} />
+              <title>{p.id}</title>
+            </g>
+          );
+        })}
         {layout.yTicks.map((t) => (
           <g key={`y${t.value}`}>
             <line x1={plot.left - 5} x2={plot.left} y1={t.px} y2={t.px} className="axis-line" />
@@ -177,6 +216,8 @@ export function PlaneMap(props: PlaneMapProps) {
           height={plot.height}
           className="plane-frame"
           onClick={onClick}
+          onPointerMove={onMove}
+          onPointerLeave={() => setHover(null)}
         >
           {props.onPickDepth ? (
             <title>Click to show the lateral profile at this depth</title>
@@ -224,6 +265,11 @@ export function PlaneMap(props: PlaneMapProps) {
           </text>
         </g>
       </svg>
+      <div className="plane-readout" aria-live="off" data-testid={`${props.testId}-readout`}>
+        {inside && Number.isFinite(hoverValue)
+          ? `depth ${hover.z.toFixed(2)} cm, x ${hover.x.toFixed(2)} cm: ${props.formatValue(hoverValue)}`
+          : '\u00a0'}
+      </div>
     </figure>
   );
 }
