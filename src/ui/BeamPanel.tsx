@@ -4,6 +4,8 @@ import { NEEDS_WATER_DATA } from '../compute/typeAForCase';
 import { editCase, setTab, useAppStore } from '../state/store';
 import type { EditorCase } from '../state/editorCase';
 import { NumberField } from './NumberField';
+import { totalThicknessCm } from '../state/editorCase';
+import { snapCm } from '../state/layerOps';
 import { RULES } from './fieldRules';
 
 type Beam = EditorCase['beam'];
@@ -42,6 +44,7 @@ function WaterDataLine() {
 export function BeamPanel() {
   const beam = useAppStore((s) => s.history.present.beam);
   const setup = beam.setup;
+  const totalCm = useAppStore((s) => totalThicknessCm(s.history.present));
   return (
     <section className="panel" aria-labelledby="beam-h">
       <h2 id="beam-h">Beam</h2>
@@ -83,7 +86,8 @@ export function BeamPanel() {
                         : {
                             kind: 'SAD',
                             sadCm: 100,
-                            isocentreDepthCm: Math.min(10, setup.kind === 'SSD' ? 10 : 10),
+                            // 10 cm deep, or mid-phantom in a thinner one.
+                            isocentreDepthCm: Math.min(10, snapCm(totalCm / 2)),
                           },
                   })
                 }

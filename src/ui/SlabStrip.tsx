@@ -19,6 +19,7 @@ const HEIGHT = BAND_TOP + BAND_H + RULER_H;
 export function SlabStrip({ width }: { width: number }) {
   const layers = useAppStore((s) => s.history.present.layers);
   const points = useAppStore((s) => s.history.present.points);
+  const setup = useAppStore((s) => s.history.present.beam.setup);
   const svgRef = useRef<SVGSVGElement>(null);
   const frame = { width, height: HEIGHT, margin: { ...SIDE_MARGIN, top: 0, bottom: 0 } };
   const layout = slabLayout(
@@ -147,6 +148,18 @@ export function SlabStrip({ width }: { width: number }) {
           </g>
         );
       })}
+      {setup.kind === 'SAD' && setup.isocentreDepthCm <= layout.totalCm ? (
+        <g
+          className="iso-marker"
+          pointerEvents="none"
+          transform={`translate(${layout.x(setup.isocentreDepthCm)} ${BAND_TOP + BAND_H - 10})`}
+          data-testid="isocentre"
+        >
+          <circle r={5} />
+          <path d="M-7,0H7M0,-7V7" />
+          <title>{`Isocentre at ${setup.isocentreDepthCm} cm (SAD ${setup.sadCm} cm)`}</title>
+        </g>
+      ) : null}
       {layout.handles.map((h) => (
         <g
           key={h.k}

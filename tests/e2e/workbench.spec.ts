@@ -61,6 +61,11 @@ test('builds a three-layer lung case by hand, saves it, and finds it restored af
   await expect(page.getByText('Layer 3 density: must be > 0 g/cm³')).toBeVisible();
   await expect(page.getByTestId('layer-3-density')).toHaveValue('-1');
   await page.getByTestId('layer-3-density').fill('');
+  // An SAD set-up marks the isocentre on the slab strip.
+  await page.getByRole('radio', { name: 'SAD' }).check();
+  await expect(page.getByTestId('isocentre')).toBeVisible();
+  await page.getByRole('radio', { name: 'SSD' }).check();
+  await expect(page.getByTestId('isocentre')).toHaveCount(0);
   await expect(page.getByTestId('slab-2')).toContainText('Lung');
   await page.screenshot({ path: testInfo.outputPath('built-case.png'), fullPage: true });
 
