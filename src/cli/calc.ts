@@ -13,6 +13,7 @@ const USAGE = `Usage: npm run calc -- <case.json | plan.json> [--json] [--method
                   file prints "lamina.plancalc")
   --methods LIST  comma-separated method ids to compute (default: all available)
   --tolerances H,X  check tolerances in % for homogeneous and heterogeneous paths (default 2,5)
+  --prescribe P=D  total dose D (cGy) at point P from all beams: prints the MU per beam
   --check-method ID  method whose verdict decides the check (default: rtmr when available)
 ${WATER_TABLE_USAGE}
 ${MC_USAGE}`;

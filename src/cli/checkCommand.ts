@@ -31,7 +31,10 @@ export function loadDocument(text: string): LoadedDocument {
   return { isPlan, parsed: validatePlan(raw) };
 }
 
-/** Options from --methods, --tolerances H,X and --check-method ID; throws on a malformed value. */
+/**
+ * Options from --methods, --tolerances H,X, --prescribe POINT=DOSE and --check-method ID; throws on
+ * a malformed value.
+ */
 export function planOptionsOf(flags: Map<string, string | true>): PlanCalcOptions {
   const options: PlanCalcOptions = {};
   const methods = flags.get('methods');
@@ -48,6 +51,14 @@ export function planOptionsOf(flags: Map<string, string | true>): PlanCalcOption
         '--tolerances needs two positive percentages: homogeneous,heterogeneous (e.g. 2,5)',
       );
     options.tolerances = { homogeneousPercent: h, heterogeneousPercent: x };
+  }
+  const rx = flags.get('prescribe');
+  if (typeof rx === 'string') {
+    const m = /^(.+)=([^=]+)$/.exec(rx);
+    const dose = m ? Number(m[2]) : NaN;
+    if (!m || !(dose > 0) || !Number.isFinite(dose))
+      throw new Error('--prescribe needs POINT=DOSE with the dose in cGy (e.g. P1=200)');
+    options.prescription = { pointId: m[1] as string, doseCGy: dose };
   }
   const method = flags.get('check-method');
   if (typeof method === 'string') options.checkMethodId = method;

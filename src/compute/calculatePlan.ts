@@ -5,7 +5,12 @@ import { calculateCase, type CalcOptions, type CalcReport } from './calculateCas
 import { waterDataForCase } from './typeAForCase';
 import { ssdCmOf } from '../engine/beam/geometry';
 import { dosePerMuFactors, type DosePerMuFactors } from '../engine/check/dosePerMu';
-import { checkPlan, type CheckBeamInput, type PlanCheck } from '../engine/check/planCheck';
+import {
+  checkPlan,
+  type CheckBeamInput,
+  type PlanCheck,
+  type Prescription,
+} from '../engine/check/planCheck';
 import { DEFAULT_TOLERANCES, type Tolerances } from '../engine/check/tolerance';
 import type { LaminaPlan } from '../io/planFile';
 
@@ -14,6 +19,8 @@ export interface PlanCalcOptions extends CalcOptions {
   tolerances?: Tolerances;
   /** Overrides the plan's decisive method. */
   checkMethodId?: string;
+  /** Overrides the plan's prescription (total dose at a point, all beams). */
+  prescription?: Prescription;
 }
 
 export interface PlanBeamReport {
@@ -74,7 +81,7 @@ export function waterChainsOf(
 }
 
 export function calculatePlan(plan: LaminaPlan, options: PlanCalcOptions = {}): PlanReport {
-  const { tolerances, checkMethodId, ...calcOptions } = options;
+  const { tolerances, checkMethodId, prescription, ...calcOptions } = options;
   const beams = plan.beams.map((b) => ({
     id: b.id,
     label: b.label || b.case.name || b.id,
@@ -88,7 +95,7 @@ export function calculatePlan(plan: LaminaPlan, options: PlanCalcOptions = {}): 
     ),
     {
       tolerances: tolerances ?? plan.tolerances ?? DEFAULT_TOLERANCES,
-      prescription: plan.prescription,
+      prescription: prescription ?? plan.prescription,
       decisiveMethodId: checkMethodId ?? plan.checkMethodId,
     },
   );

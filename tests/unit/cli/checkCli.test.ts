@@ -128,4 +128,16 @@ describe('calc CLI: point check', () => {
     // Several files without --batch run the same batch.
     expect(calc([WATER, PLAN]).code).toBe(0);
   });
+
+  it('planOptionsOf(--prescribe P=D) gives the MU for the prescribed dose at the point', () => {
+    const rx = planOptionsOf(new Map([['prescribe', 'ref=180']]));
+    expect(rx.prescription).toEqual({ pointId: 'ref', doseCGy: 180 });
+    const { result } = run(WATER, ['--prescribe', 'ref=180']);
+    const m = result.check.beams[0]?.points[0]?.methods.find((x) => x.methodId === 'rtmr');
+    expect(result.check.beams[0]?.points[0]?.prescribedDoseCGy).toBe(180);
+    // MU = D / (dose per MU), exact division.
+    expect(m?.mu).toBe(180 / (m?.dosePerMuCGy as number));
+    expect(() => planOptionsOf(new Map([['prescribe', 'P1']]))).toThrow(/POINT=DOSE/);
+    expect(() => planOptionsOf(new Map([['prescribe', 'P1=-5']]))).toThrow(/POINT=DOSE/);
+  });
 });
