@@ -17,24 +17,26 @@ export function doseSeries(
   mode: NormalisationMode,
 ): { ok: true; axisLabel: string; series: CurveSeries[] } | { ok: false; reason: string } {
   const styles = methodStyles(report);
-  const shown = report.methods.filter((m) => !hidden.includes(m.id));
-  const n = normaliseMethods(shown, mode);
+  // Normalise over every method (the water curve may be hidden but still the reference).
+  const n = normaliseMethods(report.methods, mode);
   if (!n.ok) return n;
   return {
     ok: true,
     axisLabel: n.axisLabel,
-    series: n.series.map((s, i) => {
-      const m = shown[i]!;
-      const st = styles.get(m.id)!;
-      return {
-        id: m.id,
-        label: m.label,
-        color: st.color,
-        dash: st.dash,
-        values: s.values,
-        sigma: s.sigma,
-      };
-    }),
+    series: n.series
+      .map((s, i) => ({ s, m: report.methods[i]! }))
+      .filter(({ m }) => !hidden.includes(m.id))
+      .map(({ s, m }) => {
+        const st = styles.get(m.id)!;
+        return {
+          id: m.id,
+          label: m.label,
+          color: st.color,
+          dash: st.dash,
+          values: s.values,
+          sigma: s.sigma,
+        };
+      }),
   };
 }
 
