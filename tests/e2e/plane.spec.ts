@@ -35,6 +35,11 @@ test('shows the dose map with isodose lines, a profile that follows the depth, a
   await expect(page.getByTestId('plane-map-bar')).toContainText('% of CAX max');
   await expect(page.getByTestId('plane-isodose-note')).toContainText('20, 50, 80, 90, 95, 100 %');
   await page.screenshot({ path: testInfo.outputPath('plane-chest.png'), fullPage: true });
+  // The colour bar follows the chosen unit.
+  await page.getByTestId('plane-unit').selectOption('dose');
+  await expect(page.getByTestId('plane-map-bar')).toContainText('cGy/MU');
+  await expect(page.getByTestId('plane-profile')).toContainText('Dose per MU (cGy/MU)');
+  await page.getByTestId('plane-unit').selectOption('percent');
 
   // Moving the profile depth changes the superposition profile.
   const profile = page.getByTestId('plane-profile');
@@ -74,6 +79,9 @@ test('shows the dose map with isodose lines, a profile that follows the depth, a
   await page.getByTestId('diff-b').selectOption('monte-carlo');
   await expect(page.getByTestId('plane-diff-missing')).toContainText('No plane for Monte Carlo');
   await expectNoNaN(page);
+  await page.getByRole('combobox', { name: 'Theme' }).selectOption('dark');
+  await page.getByTestId('plane-map').scrollIntoViewIfNeeded();
+  await page.screenshot({ path: testInfo.outputPath('plane-dark.png') });
 });
 
 test('an edit shows "updating…" and the map follows the new slabs', async ({ page }) => {

@@ -33,7 +33,7 @@ function MethodSelect(props: {
   label: string;
   value: PlaneMethodId;
   onChange: (id: PlaneMethodId) => void;
-  sources: { id: PlaneMethodId; label: string; grid: unknown }[];
+  sources: { id: PlaneMethodId; label: string; grid: unknown; reason: string | null }[];
 }) {
   return (
     <label className="inline">
@@ -46,7 +46,7 @@ function MethodSelect(props: {
         {props.sources.map((s) => (
           <option key={s.id} value={s.id}>
             {s.label}
-            {s.grid ? '' : ' (no plane)'}
+            {s.grid ? '' : s.reason === 'being calculated…' ? ' (calculating…)' : ' (no plane)'}
           </option>
         ))}
       </select>
@@ -67,11 +67,12 @@ export function DosePlanePanel() {
     () =>
       planeSources({
         typeB: planes,
+        pending: updating,
         mc: { plane: mcPlane, matches: runMatchesCase(mcKey, raw), running: mcRunning },
       }),
     // raw changes with every edit; the plane only with the key
     // eslint-disable-next-line react-hooks/exhaustive-deps
-    [planes, mcPlane, mcKey, mcRunning, key],
+    [planes, updating, mcPlane, mcKey, mcRunning, key],
   );
   const [rootRef, width] = useElementWidth<HTMLDivElement>();
   const [mapId, setMapId] = useState<PlaneMethodId>('superposition');
@@ -251,19 +252,23 @@ export function DosePlanePanel() {
             />
           </label>
         </div>
-        <ProfileChart
-          title={`Lateral dose profiles at ${depthCm.toFixed(1)} cm depth`}
-          series={profileSeries}
-          halfWidthCm={halfWidthCm}
-          width={width}
-          height={260}
-          yLabel={unit === 'percent' ? 'Dose (% of own CAX max)' : 'Dose per MU (cGy/MU)'}
-        />
+        {profileSeries.length > 0 ? (
+          <ProfileChart
+            title={`Lateral dose profiles at ${depthCm.toFixed(1)} cm depth`}
+            series={profileSeries}
+            halfWidthCm={halfWidthCm}
+            width={width}
+            height={260}
+            yLabel={unit === 'percent' ? 'Dose (% of own CAX max)' : 'Dose per MU (cGy/MU)'}
+          />
+        ) : null}
         <p className="plane-note" data-testid="profile-note">
-          Profiles at {depthCm.toFixed(1)} cm depth
+          {profileSeries.length > 0
+            ? `Profiles at ${depthCm.toFixed(1)} cm depth.`
+            : 'No profiles.'}
           {sources
             .filter((s) => !s.grid)
-            .map((s) => `; no plane for ${s.label}: ${s.reason}`)
+            .map((s) => ` No plane for ${s.label}: ${s.reason}`)
             .join('')}
         </p>
       </section>

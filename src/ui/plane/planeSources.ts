@@ -75,6 +75,8 @@ export function gridOfMc(p: McPlane): PlaneGrid {
 /** The three planes with a plain reason for each one that is missing or cannot be drawn. */
 export function planeSources(input: {
   typeB: Partial<Record<'superposition' | 'pencil-beam', DosePlane | string>>;
+  /** True while the compute worker is working on the planes. */
+  pending?: boolean;
   mc: { plane: McPlane | null; matches: boolean; running: boolean };
 }): PlaneSource[] {
   return PLANE_METHODS.map(({ id, label: name }) => {
@@ -82,20 +84,21 @@ export function planeSources(input: {
     let grid: PlaneGrid | null = null;
     let reason: string | null = null;
     if (id === 'monte-carlo') {
-      if (!input.mc.plane) reason = 'No Monte Carlo run yet for this case (Monte Carlo run tab).';
+      if (!input.mc.plane) reason = 'no Monte Carlo run yet for this case (Monte Carlo run tab).';
       else if (!input.mc.matches)
-        reason = 'The last Monte Carlo run was for another beam or slab stack; run it again.';
+        reason = 'the last Monte Carlo run was for another beam or slab stack; run it again.';
       else grid = gridOfMc(input.mc.plane);
       if (grid && input.mc.running) label = 'Monte Carlo (run in progress)';
     } else {
       const p = input.typeB[id];
-      if (p === undefined) reason = 'Not calculated yet.';
+      if (p === undefined)
+        reason = input.pending ? 'being calculated…' : 'not calculated (see the message above).';
       else if (typeof p === 'string') reason = p;
       else grid = gridOfTypeB(p);
     }
     if (grid && !isDrawable(grid)) {
       grid = null;
-      reason = 'This plane has missing or non-finite values and is not drawn.';
+      reason = 'this plane has missing or non-finite values and is not drawn.';
     }
     return { id, label, grid, reason };
   });

@@ -67,9 +67,9 @@ describe('planeSources(...)', () => {
     });
     expect(s.map((x) => x.id)).toEqual(['superposition', 'pencil-beam', 'monte-carlo']);
     expect(s[0]?.grid && isDrawable(s[0].grid)).toBe(true);
-    expect(s[1]).toMatchObject({ grid: null, reason: 'Not calculated yet.' });
+    expect(s[1]).toMatchObject({ grid: null, reason: 'not calculated (see the message above).' });
     expect(s[2]?.grid).toBeNull();
-    expect(s[2]?.reason).toMatch(/No Monte Carlo run/);
+    expect(s[2]?.reason).toMatch(/no Monte Carlo run/);
   });
 
   it('planeSources(...) shows the Monte Carlo plane only for a matching run, marked while running', () => {
