@@ -86,6 +86,8 @@ test('a long run is cancelled mid-way and the page responds to an edit at once',
   await page.getByRole('tab', { name: 'Depth dose' }).click();
   const mcPath = page.getByTestId('dose-chart').locator('path[data-method="monte-carlo"]');
   await expect(mcPath).toHaveCount(1);
+  await expect(page.getByTestId('toggle-monte-carlo')).toBeVisible();
+  await expect(page.locator('.chart-controls')).toContainText('Monte Carlo (running, partial)');
   const first = await mcPath.getAttribute('d');
   await expect.poll(() => mcPath.getAttribute('d'), { timeout: 30_000 }).not.toBe(first);
   await page

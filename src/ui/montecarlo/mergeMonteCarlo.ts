@@ -10,15 +10,27 @@ function sameGrid(a: readonly number[], b: readonly number[]): boolean {
   return a.every((v, i) => Math.abs(v - (b[i] as number)) <= tol);
 }
 
-/** The report with `mc` appended (replacing any method of the same id), or the report unchanged. */
+/**
+ * The report with `mc` appended (replacing any method of the same id; `note` added to its label),
+ * or the report unchanged.
+ */
 export function withMonteCarloMethod<R extends CalcReport | null>(
   report: R,
   mc: MethodResult | null | undefined,
   runIsCurrent: boolean,
+  note: string | null = null,
 ): R {
   if (!report || !mc || !runIsCurrent) return report;
   if (!sameGrid(mc.curve.depthCm, report.depthCm)) return report;
   const ids = new Set(report.points.map((p) => p.id));
   if (mc.points.some((p) => !ids.has(p.id))) return report;
-  return { ...report, methods: [...report.methods.filter((m) => m.id !== mc.id), mc] };
+  const shown = note ? { ...mc, label: `${mc.label} (${note})` } : mc;
+  return { ...report, methods: [...report.methods.filter((m) => m.id !== mc.id), shown] };
+}
+
+/** Words added to the MC label in legends and tables while its result is not a finished run. */
+export function partialRunNote(status: string): string | null {
+  if (status === 'running') return 'running, partial';
+  if (status === 'cancelled') return 'cancelled, partial';
+  return null;
 }

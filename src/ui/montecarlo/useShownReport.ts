@@ -4,7 +4,7 @@ import { useMemo } from 'react';
 import type { CalcReport } from '../../compute/calculateCase';
 import { useMonteCarloStore } from '../../state/monteCarloStore';
 import { useAppStore } from '../../state/store';
-import { withMonteCarloMethod } from './mergeMonteCarlo';
+import { partialRunNote, withMonteCarloMethod } from './mergeMonteCarlo';
 import { isRunCurrent, monteCarloCaseKey } from './mcRunModel';
 
 /** The key of the case being edited, as the Monte Carlo run store keys runs. */
@@ -18,7 +18,11 @@ export function useShownReport(): CalcReport | null {
   const report = useAppStore((s) => s.calc.report);
   const runKey = useMonteCarloStore((s) => s.caseKey);
   const method = useMonteCarloStore((s) => s.result?.method);
+  const note = useMonteCarloStore((s) => partialRunNote(s.status));
   const currentKey = useCurrentMcCaseKey();
   const current = isRunCurrent(runKey, currentKey);
-  return useMemo(() => withMonteCarloMethod(report, method, current), [report, method, current]);
+  return useMemo(
+    () => withMonteCarloMethod(report, method, current, note),
+    [report, method, current, note],
+  );
 }

@@ -10,7 +10,7 @@ import type { LaminaCase } from '../../../src/io/caseSchema';
 import { CASE_FORMAT, CASE_VERSION } from '../../../src/io/caseSchema';
 import { useMonteCarloStore, type MonteCarloState } from '../../../src/state/monteCarloStore';
 import { cancelRun, startRun, useMcForm } from '../../../src/ui/montecarlo/mcRunner';
-import { withMonteCarloMethod } from '../../../src/ui/montecarlo/mergeMonteCarlo';
+import { partialRunNote, withMonteCarloMethod } from '../../../src/ui/montecarlo/mergeMonteCarlo';
 import { cfSeries, doseSeries } from '../../../src/ui/series';
 
 const CASE: LaminaCase = {
@@ -130,6 +130,10 @@ describe('withMonteCarloMethod', () => {
     expect(withMonteCarloMethod(null, mc, true)).toBeNull();
     const otherGrid = { ...REPORT, depthCm: REPORT.depthCm.map((d) => d * 1.1) };
     expect(withMonteCarloMethod(otherGrid, mc, true)).toBe(otherGrid);
+    const running = withMonteCarloMethod(REPORT, mc, true, partialRunNote('running'));
+    expect(running.methods.at(-1)?.label).toBe('Monte Carlo (running, partial)');
+    expect(partialRunNote('cancelled')).toBe('cancelled, partial');
+    expect(partialRunNote('done')).toBeNull();
     const otherPoints = { ...REPORT, points: [] };
     expect(withMonteCarloMethod(otherPoints, mc, true)).toBe(otherPoints);
   });
