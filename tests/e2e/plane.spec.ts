@@ -110,6 +110,12 @@ test('an edit shows "updating…" and the map follows the new slabs', async ({ p
     .toContain('updating…');
   await expect(page.getByTestId('plane-status')).toHaveText('up to date');
   await expect.poll(async () => d50.getAttribute('d')).not.toEqual(before);
+  const after = await d50.getAttribute('d');
+  // Back from another tab: the remembered planes are shown again without a new calculation.
+  await page.getByRole('tab', { name: 'Depth dose' }).click();
+  await page.getByRole('tab', { name: 'Dose plane' }).click();
+  await expect(page.getByTestId('plane-status')).toHaveText('up to date');
+  expect(await d50.getAttribute('d')).toEqual(after);
   await expectNoNaN(page);
 });
 

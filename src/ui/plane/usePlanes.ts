@@ -1,7 +1,8 @@
 // Keeps the type-B dose planes in step with the beam and slabs of the case on screen: each change
 // asks the compute worker for the superposition and pencil-beam planes; only the newest answer is
 // kept (older ones dropped, a waiting request replaced), and `updating` shows while one is out.
-import { useEffect, useState } from 'react';
+// The last planes are remembered for their key, so coming back to the tab shows them at once.
+import { useEffect, useRef, useState } from 'react';
 import { getComputeWorker } from '../../compute/computeClient';
 import type { DosePlane } from '../../engine/superposition/typeBMethods';
 import type { LaminaCase } from '../../io/caseSchema';
@@ -18,25 +19,34 @@ export interface PlanesState {
 
 const ENGINES = ['superposition', 'pencil-beam'] as const;
 
-async function fetchPlanes(raw: LaminaCase): Promise<TypeBPlanes | string> {
+let remembered: { key: string; planes: TypeBPlanes } | null = null;
+
+async function fetchPlanes(input: {
+  raw: LaminaCase;
+  key: string;
+}): Promise<{ key: string; planes: TypeBPlanes } | string> {
   const api = getComputeWorker();
   const answers = await Promise.all(
-    ENGINES.map((method) => api.dosePlane(raw, { method, profileDepthsCm: [] })),
+    ENGINES.map((method) => api.dosePlane(input.raw, { method, profileDepthsCm: [] })),
   );
-  const out: TypeBPlanes = {};
+  const planes: TypeBPlanes = {};
   for (const [k, a] of answers.entries()) {
     if (!a.ok)
       return `The case cannot be calculated as it stands: ${a.problems
         .map((p) => `${p.path}: ${p.message}`)
         .join('; ')}`;
-    out[ENGINES[k] as (typeof ENGINES)[number]] = a.plane;
+    planes[ENGINES[k] as (typeof ENGINES)[number]] = a.plane;
   }
-  return out;
+  return { key: input.key, planes };
 }
 
 /** Planes for `raw` (recomputed when `key` changes or `retry` increments). */
 export function usePlanes(raw: LaminaCase, key: string, retry: number): PlanesState {
-  const [state, setState] = useState<PlanesState>({ planes: {}, updating: true, error: null });
+  const [state, setState] = useState<PlanesState>(() =>
+    remembered?.key === key
+      ? { planes: remembered.planes, updating: false, error: null }
+      : { planes: {}, updating: true, error: null },
+  );
   const [runner] = useState(() =>
     makeLatestOnly(
       fetchPlanes,
@@ -52,14 +62,20 @@ export function usePlanes(raw: LaminaCase, key: string, retry: number): PlanesSt
           }
           if (typeof result.value === 'string')
             return { ...s, updating: superseded, error: result.value };
-          return { planes: result.value, updating: superseded, error: null };
+          remembered = result.value;
+          return { planes: result.value.planes, updating: superseded, error: null };
         });
       },
       () => setState((s) => (s.updating ? s : { ...s, updating: true })),
     ),
   );
+  const mounted = useRef(false);
   useEffect(() => {
-    runner.request(raw);
+    const first = !mounted.current;
+    mounted.current = true;
+    // On arrival, planes remembered for this very key need no new request.
+    if (first && remembered?.key === key) return;
+    runner.request({ raw, key });
     // `raw` changes with every edit; only a change of beam or slabs (the key) needs new planes.
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [key, retry, runner]);
