@@ -103,14 +103,15 @@ test('a long run is cancelled mid-way and the page responds to an edit at once',
   expect(done).toMatch(/of 5 000 000$/);
   expect(done).not.toMatch(/^5 000 000 of/);
   await page.screenshot({ path: testInfo.outputPath('mc-cancelled.png'), fullPage: true });
-  // The app responds right after: an edit is taken and calculated within a short time.
+  // The page responds right after Cancel: the edit shows at once and the run is marked stale
+  // (a re-render on a free main thread; 3 s is generous for a loaded test machine).
   const t0 = Date.now();
   await page.getByTestId('layer-1-thickness').fill('5');
   await expect(page.getByTestId('layer-1-thickness')).toHaveValue('5');
   await expect(page.getByTestId('mc-stale')).toBeVisible();
+  expect(Date.now() - t0).toBeLessThan(3_000);
   await page.getByRole('tab', { name: 'Depth dose' }).click();
   await expect(page.getByTestId('calc-status')).toContainText('calculated in');
-  expect(Date.now() - t0).toBeLessThan(5_000);
   await expect(
     page.getByTestId('dose-chart').locator('path[data-method="monte-carlo"]'),
   ).toHaveCount(0);
