@@ -1,7 +1,7 @@
 // Water data: load a measured TMR or PDD table and scatter factors (file or paste), see them
 // checked (problems name row and column) and plotted, and choose what the case's type-A methods
 // read: the modelled beam of the case's energy, or the measured table carried in the case.
-import { useAppStore, editCase, setWaterSource } from '../state/store';
+import { useAppStore, editCase, setNotice, setWaterSource } from '../state/store';
 import {
   checkWaterDraft,
   draftOf,
@@ -13,6 +13,25 @@ import {
 import { seriesStyles } from '../plots/palette';
 import { CurveChart } from './CurveChart';
 import { loadDemoTables } from './demoTables';
+
+/** Largest table file read: a case carries at most 500 000 characters of table text. */
+export const MAX_TABLE_FILE_BYTES = 2 * 1024 * 1024;
+
+/** Read a picked table file, refusing one far too large or unreadable with a notice. */
+function readTableFile(f: File, onText: (name: string, text: string) => void): void {
+  const refuse = (why: string) =>
+    setNotice({ kind: 'error', title: `${f.name} was not read.`, lines: [why] });
+  if (f.size > MAX_TABLE_FILE_BYTES) {
+    refuse(
+      `${(f.size / 1024 / 1024).toFixed(1)} MB is too large for a water table (at most ${MAX_TABLE_FILE_BYTES / 1024 / 1024} MB)`,
+    );
+    return;
+  }
+  f.text().then(
+    (t) => onText(f.name, t),
+    (e: unknown) => refuse(`could not be read (${e instanceof Error ? e.message : String(e)})`),
+  );
+}
 
 function FileInput({
   label,
@@ -33,7 +52,7 @@ function FileInput({
         onChange={(e) => {
           const f = e.target.files?.[0];
           e.target.value = '';
-          if (f) void f.text().then((t) => onText(f.name, t));
+          if (f) readTableFile(f, onText);
         }}
       />
     </label>

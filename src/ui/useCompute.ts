@@ -50,7 +50,8 @@ export function useCompute(): void {
           setCalc({
             status: 'error',
             error: e instanceof Error ? e.message : String(e),
-            elapsedMs,
+            // Nothing was calculated: the header must not say "calculated in …".
+            elapsedMs: null,
           });
           return;
         }

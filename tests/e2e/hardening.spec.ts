@@ -45,6 +45,7 @@ test('a compute worker killed mid-run is replaced: the page says so, Retry recov
   const alert = page.getByRole('alert').filter({ hasText: 'The calculation failed' });
   await expect(alert).toContainText('The compute worker stopped during the calculation');
   await expect(page.getByTestId('calc-retry')).toBeVisible();
+  await expect(page.getByTestId('calc-status')).not.toContainText('calculated in');
   // The page stays usable while the worker is gone: the edit is kept.
   await expect(page.getByTestId('layer-1-thickness')).toHaveValue('4');
   await page.screenshot({ path: testInfo.outputPath('worker-lost.png'), fullPage: true });
@@ -294,4 +295,19 @@ test('a check beam whose calculation is lost with the worker says so, and Retry 
   await expect(second).toContainText('calculated');
   await expect(second).not.toContainText('stopped');
   await expect(page.getByTestId('check-total-table')).toBeVisible();
+});
+
+test('a water-table file far too large is refused with a notice, nothing else changes', async ({
+  page,
+}) => {
+  await freshPage(page);
+  await page.getByRole('tab', { name: 'Water data' }).click();
+  await page.getByTestId('water-file').setInputFiles({
+    name: 'huge.csv',
+    mimeType: 'text/csv',
+    buffer: Buffer.alloc(3 * 1024 * 1024, 0x31),
+  });
+  await expect(page.getByTestId('file-notice')).toContainText('huge.csv was not read.');
+  await expect(page.getByTestId('file-notice')).toContainText('too large for a water table');
+  await expect(page.getByTestId('water-in-case')).toHaveCount(0);
 });
