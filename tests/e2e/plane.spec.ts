@@ -52,8 +52,15 @@ test('shows the dose map with isodose lines, a profile that follows the depth, a
   const deep = await curve.getAttribute('d');
   expect(deep).not.toEqual(shallow);
   await expect(profile.locator('path[data-method="pencil-beam"]')).toHaveCount(1);
+  // Hovering the profile reads out every method's value at that x.
+  await profile.locator('rect.hit').scrollIntoViewIfNeeded();
+  const pbox = await profile.locator('rect.hit').boundingBox();
+  if (!pbox) throw new Error('no profile area');
+  await page.mouse.move(pbox.x + pbox.width / 2, pbox.y + pbox.height / 2);
+  await expect(page.getByTestId('plane-profile-readout')).toContainText(/Superposition\s*\d+\.\d/);
 
   // A click on the map sets the profile depth near where it was clicked.
+  await map.locator('rect.plane-frame').scrollIntoViewIfNeeded();
   const box = await map.locator('rect.plane-frame').boundingBox();
   if (!box) throw new Error('no map frame');
   await page.mouse.click(box.x + box.width * 0.25, box.y + box.height / 2);

@@ -260,6 +260,7 @@ export function DosePlanePanel() {
             width={width}
             height={260}
             yLabel={unit === 'percent' ? 'Dose (% of own CAX max)' : 'Dose per MU (cGy/MU)'}
+            digits={unit === 'percent' ? 1 : 3}
           />
         ) : null}
         <p className="plane-note" data-testid="profile-note">

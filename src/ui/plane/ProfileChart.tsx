@@ -1,5 +1,7 @@
 // Lateral dose profiles at one depth, every method with a plane overlaid (thin renderer over
-// profileLayout), with a legend.
+// profileLayout), with a legend and a readout of every method's value under the pointer.
+import { useState, type PointerEvent } from 'react';
+import { cellOf } from '../../plots/planeGrid';
 import { profileLayout, type ProfileSeries } from '../../plots/profileLayout';
 import { SIDE_MARGIN } from '../frame';
 
@@ -10,6 +12,7 @@ export function ProfileChart(props: {
   width: number;
   height: number;
   yLabel: string;
+  digits: number;
 }) {
   const frame = {
     width: props.width,
@@ -20,6 +23,19 @@ export function ProfileChart(props: {
   const { plot } = layout;
   const bottom = plot.top + plot.height;
   const right = plot.left + plot.width;
+  const [hoverX, setHoverX] = useState<number | null>(null);
+  const onMove = (e: PointerEvent<SVGRectElement>) => {
+    const box = e.currentTarget.ownerSVGElement?.getBoundingClientRect();
+    setHoverX(layout.x.invert(e.clientX - (box?.left ?? 0)));
+  };
+  const valueAt = (xs: readonly number[], vs: readonly number[], x: number): number => {
+    if (xs.length < 2 || x < (xs[0] ?? 0) || x > (xs[xs.length - 1] ?? 0)) return NaN;
+    const { i, t } = cellOf(xs, x);
+    const a = vs[i] ?? NaN;
+    const b = vs[i + 1] ?? NaN;
+    return a + (b - a) * t;
+  };
+  const hx = hoverX === null ? null : Math.round(layout.x(hoverX) * 10) / 10;
   return (
     <figure className="chart" data-testid="plane-profile">
       <figcaption className="sr-only">{props.title}</figcaption>
@@ -67,6 +83,18 @@ export function ProfileChart(props: {
             data-method={c.id}
           />
         ))}
+        {hx !== null ? (
+          <line x1={hx} x2={hx} y1={plot.top} y2={bottom} className="crosshair" />
+        ) : null}
+        <rect
+          x={plot.left}
+          y={plot.top}
+          width={plot.width}
+          height={plot.height}
+          className="hit"
+          onPointerMove={onMove}
+          onPointerLeave={() => setHoverX(null)}
+        />
         {layout.empty ? (
           <text
             x={(plot.left + right) / 2}
@@ -78,6 +106,37 @@ export function ProfileChart(props: {
           </text>
         ) : null}
       </svg>
+      {hoverX !== null && hx !== null ? (
+        <div
+          className="readout"
+          role="status"
+          data-testid="plane-profile-readout"
+          style={
+            hx > plot.left + plot.width / 2 ? { right: props.width - hx + 10 } : { left: hx + 10 }
+          }
+        >
+          <div className="readout-depth">x {hoverX.toFixed(2)} cm</div>
+          {props.series.map((s) => {
+            const v = valueAt(s.xCm, s.values, hoverX);
+            return (
+              <div key={s.id} className="readout-row">
+                <svg width="22" height="8" aria-hidden="true">
+                  <line
+                    x1="0"
+                    x2="22"
+                    y1="4"
+                    y2="4"
+                    stroke={s.color}
+                    strokeDasharray={s.dash || undefined}
+                  />
+                </svg>
+                <span>{s.label}</span>
+                <span className="num">{Number.isFinite(v) ? v.toFixed(props.digits) : '—'}</span>
+              </div>
+            );
+          })}
+        </div>
+      ) : null}
       <div className="chart-legend">
         {props.series.map((s) => (
           <span key={s.id}>
