@@ -2,14 +2,16 @@
 // lines under the slab strip (same depth axis), lateral profiles of every method at a chosen depth,
 // and the difference between two methods in % of the reference method's central-axis maximum.
 import { useMemo, useState } from 'react';
-import { interpolateRdBu, interpolateViridis, scaleLinear } from 'd3';
+import { interpolateViridis } from 'd3';
 import { toCaseFile, boundariesCm, totalThicknessCm } from '../../state/editorCase';
 import { useAppStore } from '../../state/store';
 import { useMonteCarloStore } from '../../state/monteCarloStore';
 import { seriesStyles } from '../../plots/palette';
-import { centralAxisMax, planeDifferencePercent, rowAtDepth } from '../../plots/planeGrid';
+import { centralAxisMax, rowAtDepth } from '../../plots/planeGrid';
 import { SlabStrip } from '../SlabStrip';
 import { useElementWidth } from '../useElementWidth';
+import { DifferenceSection } from './DifferenceSection';
+import { MethodSelect } from './MethodSelect';
 import { PlaneMap } from './PlaneMap';
 import { ProfileChart } from './ProfileChart';
 import { planeKeyOf, planeSources, runMatchesCase, type PlaneMethodId } from './planeSources';
@@ -17,7 +19,6 @@ import { usePlanes } from './usePlanes';
 import './plane.css';
 
 const ISODOSE_PERCENTS = [20, 50, 80, 90, 95, 100] as const;
-const diverging = (t: number) => interpolateRdBu(1 - t);
 
 type Unit = 'percent' | 'dose';
 
@@ -26,32 +27,6 @@ function halfWidthOf(grids: readonly { xCm: readonly number[] }[]): number {
   for (const g of grids)
     h = Math.max(h, Math.abs(g.xCm[0] ?? 0), Math.abs(g.xCm[g.xCm.length - 1] ?? 0));
   return h;
-}
-
-function MethodSelect(props: {
-  id: string;
-  label: string;
-  value: PlaneMethodId;
-  onChange: (id: PlaneMethodId) => void;
-  sources: { id: PlaneMethodId; label: string; grid: unknown; reason: string | null }[];
-}) {
-  return (
-    <label className="inline">
-      <span>{props.label}</span>
-      <select
-        data-testid={props.id}
-        value={props.value}
-        onChange={(e) => props.onChange(e.target.value as PlaneMethodId)}
-      >
-        {props.sources.map((s) => (
-          <option key={s.id} value={s.id}>
-            {s.label}
-            {s.grid ? '' : s.reason === 'being calculated…' ? ' (calculating…)' : ' (no plane)'}
-          </option>
-        ))}
-      </select>
-    </label>
-  );
 }
 
 export function DosePlanePanel() {
@@ -77,8 +52,6 @@ export function DosePlanePanel() {
   const [rootRef, width] = useElementWidth<HTMLDivElement>();
   const [mapId, setMapId] = useState<PlaneMethodId>('superposition');
   const [unit, setUnit] = useState<Unit>('percent');
-  const [diffA, setDiffA] = useState<PlaneMethodId>('superposition');
-  const [diffB, setDiffB] = useState<PlaneMethodId>(mcPlane ? 'monte-carlo' : 'pencil-beam');
   const totalCm = totalThicknessCm(present);
   const interfacesCm = boundariesCm(present).slice(1, -1);
   const [depthText, setDepthText] = useState<string | null>(null);
@@ -119,32 +92,6 @@ export function DosePlanePanel() {
       values: unit === 'percent' ? row.map((v) => (100 * v) / n) : row,
     };
   });
-
-  const a = sources.find((s) => s.id === diffA)!;
-  const b = sources.find((s) => s.id === diffB)!;
-  const diff = useMemo(() => {
-    if (!a.grid || !b.grid || diffA === diffB) return null;
-    const g = planeDifferencePercent(a.grid, b.grid, centralAxisMax(b.grid));
-    if (g.xCm.length < 2 || g.depthCm.length < 2) return null;
-    let m = 0;
-    for (const r of g.values)
-      for (const v of r) if (Number.isFinite(v)) m = Math.max(m, Math.abs(v));
-    const lim = scaleLinear()
-      .domain([0, Math.max(1, m)])
-      .nice()
-      .domain()[1] as number;
-    return { grid: g, maxAbs: m, lim };
-  }, [a.grid, b.grid, diffA, diffB]);
-  const diffMessage =
-    diffA === diffB
-      ? 'Pick two different methods.'
-      : !a.grid
-        ? `No plane for ${a.label}: ${a.reason ?? ''}`
-        : !b.grid
-          ? `No plane for ${b.label}: ${b.reason ?? ''}`
-          : diff === null
-            ? 'The two planes do not overlap.'
-            : null;
 
   return (
     <div className="dose-plane" ref={rootRef} data-testid="dose-plane">
@@ -273,57 +220,18 @@ export function DosePlanePanel() {
             .join('')}
         </p>
       </section>
-      <section className="plane-section" aria-label="Difference between two methods">
-        <div className="chart-controls">
-          <MethodSelect
-            id="diff-a"
-            label="Difference"
-            value={diffA}
-            onChange={setDiffA}
-            sources={sources}
-          />
-          <MethodSelect
-            id="diff-b"
-            label="minus"
-            value={diffB}
-            onChange={setDiffB}
-            sources={sources}
-          />
-        </div>
-        {diff && !diffMessage ? (
-          <>
-            <PlaneMap
-              title={`${a.label} minus ${b.label} in % of the ${b.label} central-axis maximum`}
-              testId="plane-diff"
-              grid={diff.grid}
-              width={width}
-              height={mapHeight}
-              maxDepthCm={totalCm}
-              halfWidthCm={halfWidthCm}
-              interfacesCm={interfacesCm}
-              interpolate={diverging}
-              domain={[-diff.lim, diff.lim]}
-              bar={{ domain: [-diff.lim, diff.lim], label: `% of ${b.label} CAX max` }}
-              markerDepthCm={depthCm}
-              onPickDepth={pickDepth}
-              points={present.points}
-              formatValue={(v) => `${v >= 0 ? '+' : '−'}${Math.abs(v).toFixed(1)} %`}
-            />
-            <p className="plane-note" data-testid="plane-diff-note">
-              {a.label} − {b.label}: largest difference {diff.maxAbs.toFixed(1)} % of the {b.label}{' '}
-              central-axis maximum (red: {a.label} higher; blue: lower).{' '}
-              {a.grid!.xCm.length !== b.grid!.xCm.length ||
-              a.grid!.depthCm.length !== b.grid!.depthCm.length
-                ? `${a.label} resampled (bilinear) onto the ${b.label} grid.`
-                : ''}
-            </p>
-          </>
-        ) : (
-          <p className="notice info" data-testid="plane-diff-missing">
-            {diffMessage}
-          </p>
-        )}
-      </section>
+      <DifferenceSection
+        sources={sources}
+        initialB={mcPlane ? 'monte-carlo' : 'pencil-beam'}
+        width={width}
+        height={mapHeight}
+        maxDepthCm={totalCm}
+        halfWidthCm={halfWidthCm}
+        interfacesCm={interfacesCm}
+        depthCm={depthCm}
+        onPickDepth={pickDepth}
+        points={present.points}
+      />
     </div>
   );
 }
