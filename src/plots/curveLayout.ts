@@ -49,6 +49,8 @@ export interface CurveChartLayout {
   sigmaBands: { id: string; color: string; d: string }[];
   bands: { key: string; severity: string; x: number; width: number }[];
   interfaces: number[];
+  /** Series that rise above the top of the axis (spike clipping), with their largest value. */
+  clipped: { id: string; label: string; maxValue: number }[];
   /** True when no series has a single finite value. */
   empty: boolean;
 }
@@ -80,15 +82,39 @@ export function yDomainOf(
   return [lo === 0 ? 0 : lo - pad, hi + pad];
 }
 
+/**
+ * Upper axis limit that keeps a narrow spike (e.g. a power law evaluated in a build-up region)
+ * from flattening every other curve: when the largest value exceeds 1.5 × the largest
+ * 95th-percentile of the series, the axis stops at 1.15 × that percentile. Null: no clipping.
+ */
+export function spikeLimit(series: readonly CurveSeries[]): number | null {
+  let typical = -Infinity;
+  let max = -Infinity;
+  for (const s of series) {
+    const v = s.values.filter(isNum).sort((a, b) => a - b);
+    if (v.length === 0) continue;
+    typical = Math.max(typical, v[Math.floor(0.95 * (v.length - 1))] as number);
+    max = Math.max(max, v[v.length - 1] as number);
+  }
+  if (!(typical > 0) || max <= 1.5 * typical) return null;
+  return 1.15 * typical;
+}
+
 export function curveChartLayout(input: CurveChartInput): CurveChartLayout {
   const { frame } = input;
   const x = depthScale(input.maxDepthCm, frame);
   const top = frame.margin.top;
   const height = innerHeight(frame);
+  const limit = spikeLimit(input.series);
+  const [lo, hi] = yDomainOf(input.series, input.yInclude);
   const y = scaleLinear()
-    .domain(yDomainOf(input.series, input.yInclude))
+    .domain([lo, limit === null ? hi : Math.min(hi, Math.max(limit, ...(input.yInclude ?? [])))])
     .range([top + height, top])
     .nice(6);
+  const yTop = y.domain()[1] as number;
+  const clipped = input.series
+    .map((s) => ({ id: s.id, label: s.label, maxValue: Math.max(...s.values.filter(isNum)) }))
+    .filter((c) => c.maxValue > yTop);
   const depth = input.depthCm;
   const curves = input.series.map((s) => {
     const gen = line<number>()
@@ -136,6 +162,7 @@ export function curveChartLayout(input: CurveChartInput): CurveChartLayout {
     sigmaBands,
     bands,
     interfaces: (input.interfacesCm ?? []).map((z) => round1(x(z))),
+    clipped,
     empty: !input.series.some((s) => s.values.some(isNum)),
   };
 }

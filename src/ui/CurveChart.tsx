@@ -1,7 +1,7 @@
 // A chart of curves against depth (thin renderer over curveChartLayout): layer shading, warning
 // bands, ±1σ bands, one path per series, points of interest, and a crosshair readout that
 // lists every series' value at the hovered depth (pointer or arrow keys).
-import { useState, type KeyboardEvent, type PointerEvent } from 'react';
+import { useId, useState, type KeyboardEvent, type PointerEvent } from 'react';
 import {
   curveChartLayout,
   nearestIndex,
@@ -49,6 +49,7 @@ export function CurveChart(props: CurveChartProps) {
     yInclude: props.yInclude,
   });
   const [hover, setHover] = useState<number | null>(null);
+  const clipId = `clip-${useId().replace(/[^A-Za-z0-9_-]/g, '')}`;
   const { plot } = layout;
   const bottom = plot.top + plot.height;
   const right = plot.left + plot.width;
@@ -132,19 +133,24 @@ export function CurveChart(props: CurveChartProps) {
         >
           {props.axisLabel}
         </text>
-        {layout.sigmaBands.map((b) => (
-          <path key={`s${b.id}`} d={b.d} fill={b.color} className="sigma-band" />
-        ))}
-        {layout.curves.map((c) => (
-          <path
-            key={c.id}
-            d={c.d}
-            stroke={c.color}
-            strokeDasharray={c.dash || undefined}
-            className="curve"
-            data-method={c.id}
-          />
-        ))}
+        <clipPath id={clipId}>
+          <rect x={plot.left} y={plot.top - 1} width={plot.width} height={plot.height + 2} />
+        </clipPath>
+        <g clipPath={`url(#${clipId})`}>
+          {layout.sigmaBands.map((b) => (
+            <path key={`s${b.id}`} d={b.d} fill={b.color} className="sigma-band" />
+          ))}
+          {layout.curves.map((c) => (
+            <path
+              key={c.id}
+              d={c.d}
+              stroke={c.color}
+              strokeDasharray={c.dash || undefined}
+              className="curve"
+              data-method={c.id}
+            />
+          ))}
+        </g>
         {labelRows(
           props.points ?? [],
           (p) => layout.x(Math.min(p.depthCm, props.maxDepthCm)),
@@ -180,6 +186,15 @@ export function CurveChart(props: CurveChartProps) {
           </text>
         ) : null}
       </svg>
+      {layout.clipped.length ? (
+        <p className="clip-note" data-testid="clip-note">
+          Axis cut at {layout.y.domain()[1]} to keep the other curves readable; above it:{' '}
+          {layout.clipped
+            .map((c) => `${c.label} (up to ${c.maxValue.toFixed(props.digits)})`)
+            .join(', ')}
+          .
+        </p>
+      ) : null}
       {props.legend ? (
         <div className="chart-legend">
           {props.series.map((s) => (

@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { curveChartLayout, nearestIndex, yDomainOf } from '../../../src/plots/curveLayout';
+import {
+  curveChartLayout,
+  nearestIndex,
+  spikeLimit,
+  yDomainOf,
+} from '../../../src/plots/curveLayout';
 import { depthScale, depthTicks } from '../../../src/plots/depthAxis';
 
 const frame = { width: 420, height: 220, margin: { top: 10, right: 20, bottom: 30, left: 60 } };
@@ -95,5 +100,33 @@ describe('helpers', () => {
     expect(nearestIndex(grid, 0.76)).toBe(2);
     expect(nearestIndex(grid, -3)).toBe(0);
     expect(nearestIndex(grid, 9)).toBe(4);
+  });
+});
+
+describe('spikeLimit(...)', () => {
+  const smooth = Array.from({ length: 100 }, (_, i) => 1 - i / 200); // 1 … 0.505
+  const spiky = smooth.map((v, i) => (i === 30 || i === 31 ? 4.5 : v));
+
+  it('cuts the axis above a narrow spike and names the clipped series in the layout', () => {
+    const series = [
+      { id: 'water', label: 'Water', color: '', dash: '', values: smooth },
+      { id: 'batho', label: 'Batho', color: '', dash: '', values: spiky },
+    ];
+    // 95th percentile of the spiky set: sorted index 94 of 100 is smooth[3] = 0.985 (the two
+    // spikes sit at the top); 1.15 × 0.985 = 1.13275.
+    expect(spikeLimit(series)).toBeCloseTo(1.13275, 9);
+    const l = curveChartLayout({
+      depthCm: smooth.map((_, i) => i / 10),
+      maxDepthCm: 9.9,
+      series,
+      frame,
+      yInclude: [0],
+    });
+    expect(l.y.domain()[1]).toBeLessThan(1.5);
+    expect(l.clipped).toEqual([{ id: 'batho', label: 'Batho', maxValue: 4.5 }]);
+  });
+
+  it('leaves smooth curves alone', () => {
+    expect(spikeLimit([{ id: 'a', label: 'a', color: '', dash: '', values: smooth }])).toBeNull();
   });
 });
