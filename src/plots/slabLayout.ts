@@ -35,9 +35,13 @@ export function densityShade(rhoE: number): { fill: string; dark: boolean } {
   return { fill: `rgb(${level}, ${level}, ${Math.min(255, level + 8)})`, dark: level < 150 };
 }
 
-export function slabLayout(layers: readonly SlabInputLayer[], frame: PlotFrame) {
+/**
+ * `scaleDepthCm`: a depth the axis must reach at least (the stack's depth when a drag began, so
+ * the axis does not rescale under the pointer while the bottom boundary moves).
+ */
+export function slabLayout(layers: readonly SlabInputLayer[], frame: PlotFrame, scaleDepthCm = 0) {
   const total = layers.reduce((s, l) => s + l.thicknessCm, 0);
-  const x = depthScale(total, frame);
+  const x = depthScale(Math.max(total, scaleDepthCm), frame);
   const rects: SlabRect[] = [];
   const handles: SlabHandle[] = [];
   let z = 0;

@@ -1,7 +1,7 @@
 // The slab stack drawn to scale along the depth axis (beam from the left), aligned with the
 // charts below. Boundaries drag with the pointer or move with the arrow keys (±0.1 cm, Shift
 // ±1 cm); a click on the ruler places a point of interest.
-import { useRef, type KeyboardEvent, type PointerEvent } from 'react';
+import { useRef, useState, type KeyboardEvent, type PointerEvent } from 'react';
 import { getMaterial, relativeElectronDensity } from '../engine/materials/materialLibrary';
 import { depthTicks } from '../plots/depthAxis';
 import { slabLayout } from '../plots/slabLayout';
@@ -21,6 +21,8 @@ export function SlabStrip({ width }: { width: number }) {
   const points = useAppStore((s) => s.history.present.points);
   const setup = useAppStore((s) => s.history.present.beam.setup);
   const svgRef = useRef<SVGSVGElement>(null);
+  // While a boundary is dragged the axis keeps (at least) its starting depth.
+  const [frozenDepthCm, setFrozenDepthCm] = useState(0);
   const frame = { width, height: HEIGHT, margin: { ...SIDE_MARGIN, top: 0, bottom: 0 } };
   const layout = slabLayout(
     layers.map((l) => {
@@ -34,6 +36,7 @@ export function SlabStrip({ width }: { width: number }) {
       };
     }),
     frame,
+    frozenDepthCm,
   );
   const depthAt = (clientX: number) => {
     const box = svgRef.current?.getBoundingClientRect();
@@ -42,6 +45,7 @@ export function SlabStrip({ width }: { width: number }) {
   const onHandleDown = (e: PointerEvent<SVGRectElement>) => {
     e.preventDefault();
     e.currentTarget.setPointerCapture(e.pointerId);
+    setFrozenDepthCm(layout.totalCm);
   };
   const onHandleMove = (k: number) => (e: PointerEvent<SVGRectElement>) => {
     if (!e.currentTarget.hasPointerCapture(e.pointerId)) return;
@@ -51,6 +55,7 @@ export function SlabStrip({ width }: { width: number }) {
   const onHandleUp = (e: PointerEvent<SVGRectElement>) => {
     if (e.currentTarget.hasPointerCapture(e.pointerId))
       e.currentTarget.releasePointerCapture(e.pointerId);
+    setFrozenDepthCm(0);
     endGesture();
   };
   const onHandleKey = (k: number) => (e: KeyboardEvent<SVGGElement>) => {

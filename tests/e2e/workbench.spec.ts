@@ -289,3 +289,22 @@ test('the modelled beam is the default water data; a loaded table replaces it un
   await expect(cell).toHaveText(modelled);
   await expectNoNaN(page);
 });
+
+test('dragging the bottom boundary 2 cm shallower thins the last layer by 2 cm (axis holds still)', async ({
+  page,
+}) => {
+  await page.getByTestId('preset').selectOption('chest');
+  await expect(page.getByTestId('layer-3-thickness')).toHaveValue('9');
+  const handle = page.getByTestId('boundary-3').locator('rect.handle-hit');
+  const box = (await handle.boundingBox())!;
+  const lungBox = (await page.getByTestId('slab-2').locator('rect').boundingBox())!;
+  const pxPerCm = lungBox.width / 8;
+  const x0 = box.x + box.width / 2;
+  const y0 = box.y + box.height / 2;
+  await page.mouse.move(x0, y0);
+  await page.mouse.down();
+  for (let i = 1; i <= 10; i++) await page.mouse.move(x0 - (2 * pxPerCm * i) / 10, y0);
+  await page.mouse.up();
+  await expect(page.getByTestId('layer-3-thickness')).toHaveValue('7');
+  await expect(page.getByTestId('layer-2-thickness')).toHaveValue('8');
+});

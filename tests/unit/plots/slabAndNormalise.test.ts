@@ -45,6 +45,12 @@ describe('slabLayout(...)', () => {
     ]);
   });
 
+  it('slabLayout(..., scaleDepthCm) keeps the axis at a drag's starting depth', () => {
+    const l = slabLayout([{ key: 'a', label: 'Water', thicknessCm: 18, relativeElectronDensity: 1 }], frame, 20);
+    expect(l.handles[0]).toEqual({ k: 1, x: 366, depthCm: 18 }); // 60 + 18/20 × 340
+    expect(l.x(20)).toBe(400);
+  });
+
   it('densityShade(...) is lighter for lower electron density and labels dark slabs in white', () => {
     const air = densityShade(0.001);
     const lung = densityShade(0.26);
