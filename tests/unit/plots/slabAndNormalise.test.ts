@@ -45,8 +45,12 @@ describe('slabLayout(...)', () => {
     ]);
   });
 
-  it('slabLayout(..., scaleDepthCm) keeps the axis at a drag's starting depth', () => {
-    const l = slabLayout([{ key: 'a', label: 'Water', thicknessCm: 18, relativeElectronDensity: 1 }], frame, 20);
+  it('slabLayout(..., scaleDepthCm) keeps the axis at the depth where a drag began', () => {
+    const l = slabLayout(
+      [{ key: 'a', label: 'Water', thicknessCm: 18, relativeElectronDensity: 1 }],
+      frame,
+      20,
+    );
     expect(l.handles[0]).toEqual({ k: 1, x: 366, depthCm: 18 }); // 60 + 18/20 × 340
     expect(l.x(20)).toBe(400);
   });
