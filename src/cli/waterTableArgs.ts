@@ -13,7 +13,7 @@ export const WATER_TABLE_USAGE = `  --tmr FILE.csv   measured TMR table (header 
   --scatter FILE   scatter factors: field cm, S_c, S_p[, PSF]
   --dmax CM        depth of maximum dose (default: inferred from the table)
   --ref-dose X     reference dose rate, cGy/MU at d_max, 10 × 10, SSD 100 (default 1)
-  Without --tmr/--pdd the case file's inline water data are used, if any.`;
+  Without --tmr/--pdd the case file's inline water data are used, else the modelled beam.`;
 
 function numberFlag(
   flags: Map<string, string | true>,
