@@ -6,6 +6,7 @@ import { setNotice, setTab, setTheme, useAppStore, type Theme, type ViewTab } fr
 import { BeamPanel } from './BeamPanel';
 import { CfView, DoseView } from './ChartViews';
 import { FileBar } from './FileBar';
+import { openCaseFile } from './caseFileActions';
 import { LayerList } from './LayerList';
 import { MountPoint } from './MountPoint';
 import { PointsPanel } from './PointsPanel';
@@ -209,7 +210,18 @@ export function App() {
   useCompute();
   useAutosave();
   return (
-    <div className="app">
+    <div
+      className="app"
+      onDragOver={(e) => {
+        if (e.dataTransfer.types.includes('Files')) e.preventDefault();
+      }}
+      onDrop={(e) => {
+        const f = e.dataTransfer.files[0];
+        if (!f || !/\.json$/i.test(f.name)) return;
+        e.preventDefault();
+        void openCaseFile(f);
+      }}
+    >
       <header className="top">
         <h1>Lamina</h1>
         <span className="tagline">photon-beam heterogeneity corrections in slab phantoms</span>

@@ -308,3 +308,27 @@ test('dragging the bottom boundary 2 cm shallower thins the last layer by 2 cm (
   await expect(page.getByTestId('layer-3-thickness')).toHaveValue('7');
   await expect(page.getByTestId('layer-2-thickness')).toHaveValue('8');
 });
+
+test('a case file dropped on the page opens it', async ({ page }) => {
+  const text = JSON.stringify({
+    format: 'lamina.case',
+    version: 1,
+    name: 'Dropped bone slab',
+    beam: { energy: '10MV', setup: { kind: 'SSD', ssdCm: 100 }, fieldXCm: 8, fieldYCm: 8 },
+    layers: [
+      { materialId: 'water', thicknessCm: 4 },
+      { materialId: 'corticalBone', thicknessCm: 2 },
+      { materialId: 'water', thicknessCm: 12 },
+    ],
+    points: [{ id: 'P1', depthCm: 10 }],
+  });
+  const dataTransfer = await page.evaluateHandle((t) => {
+    const dt = new DataTransfer();
+    dt.items.add(new File([t], 'dropped.json', { type: 'application/json' }));
+    return dt;
+  }, text);
+  await page.locator('.app').dispatchEvent('drop', { dataTransfer });
+  await expect(page.getByTestId('layer-2-material')).toHaveValue('corticalBone');
+  await expect(page.getByLabel('Energy')).toHaveValue('10MV');
+  await expect(page.getByTestId('file-notice')).toContainText('Opened dropped.json');
+});
