@@ -102,7 +102,7 @@ export function calculateCase(c: LaminaCase, options: CalcOptions = {}): CalcRep
     ...requested
       .filter((id) => id !== MONTE_CARLO_METHOD_ID)
       .filter((id) => !isTypeAMethodId(id) && !isTypeBMethodId(id))
-      .map((id) => ({ id, reason: 'method not implemented yet' })),
+      .map((id) => ({ id, reason: `unknown method id "${id}"` })),
   ];
   const methods = [...typeA.methods, ...typeB, ...mc.methods];
   const warnings = caseWarnings(c, phantom, methods, typeA.waterData);
