@@ -1,6 +1,7 @@
 // Figures measured in Debian's Chromium (launched with the flags of playwright.config.ts):
 // cold page load to the first render of the heading, and edit-to-paint latency of keyboard
-// nudges of a layer interface in the slab editor (when the page has one).
+// nudges and pointer drags of a layer interface in the slab editor, up to the repaint of the
+// depth-dose chart's curves (when the page has both).
 import { chromium, type Browser, type Page } from '@playwright/test';
 import playwrightConfig from '../../playwright.config';
 import { errorRow, notMeasuredRow, type BenchRow } from './row';
@@ -95,20 +96,27 @@ export async function coldLoadRows(browser: Browser, url: string, runs = 5): Pro
 }
 
 const HANDLE = '[data-testid="boundary-1"]';
+const CHART = '[data-testid="dose-chart"]';
 const EDIT_GROUP = 'page (Chromium)';
 const EDIT_NAME = 'edit-to-paint, arrow-key nudge of a layer interface';
+const DRAG_NAME = 'edit-to-paint, pointer drag of a layer interface';
 
 /**
- * Listens for keydown; after the slab editor's DOM changes, notes the time to the next paint.
- * (No named inner functions: see HEADING_PROBE.)
+ * Listens for keydown and pointermove (while a button is held); when the depth-dose chart's
+ * curve paths next change (a new result drawn), notes the time from the input event to the
+ * paint that follows. (No named inner functions: see HEADING_PROBE.)
  */
-function installLatencyProbe(handleSelector: string): void {
+function installLatencyProbe(chartSelector: string): void {
   const w = window as Probe;
   w.__laminaLatencies = [];
-  const target = document.querySelector(handleSelector)?.closest('svg') ?? document.body;
   let pending: number | null = null;
-  const obs = new MutationObserver(() => {
+  const obs = new MutationObserver((records) => {
     if (pending === null) return;
+    const inChart = records.some((r) => {
+      const el = r.target instanceof Element ? r.target : r.target.parentElement;
+      return (el?.closest(chartSelector) ?? null) !== null;
+    });
+    if (!inChart) return;
     const t0 = pending;
     pending = null;
     requestAnimationFrame(() => {
@@ -117,17 +125,83 @@ function installLatencyProbe(handleSelector: string): void {
       ch.port2.postMessage(0);
     });
   });
-  obs.observe(target, { attributes: true, childList: true, subtree: true, characterData: true });
+  obs.observe(document.body, {
+    attributes: true,
+    attributeFilter: ['d'],
+    childList: true,
+    subtree: true,
+  });
   document.addEventListener('keydown', (e) => (pending = e.timeStamp), { capture: true });
+  document.addEventListener(
+    'pointermove',
+    (e) => {
+      if (e.buttons !== 0) pending = e.timeStamp;
+    },
+    { capture: true },
+  );
 }
 
-async function nudge(page: Page, key: 'ArrowRight' | 'ArrowLeft', expected: number) {
-  await page.keyboard.press(key);
+async function waitForSamples(page: Page, expected: number) {
   await page.waitForFunction(
     (n) => ((window as Probe).__laminaLatencies?.length ?? 0) >= n,
     expected,
     { timeout: 5_000 },
   );
+}
+
+async function nudge(page: Page, key: 'ArrowRight' | 'ArrowLeft', expected: number) {
+  await page.keyboard.press(key);
+  await waitForSamples(page, expected);
+}
+
+async function keyboardRows(page: Page, nudges: number): Promise<BenchRow[]> {
+  const handle = await page.waitForSelector(HANDLE, { timeout: 10_000 });
+  await handle.focus();
+  const before = await handle.getAttribute('aria-valuenow');
+  const warmUp = 4; // even, like the nudges: the boundary ends where it started
+  const start = await page.evaluate(() => (window as Probe).__laminaLatencies?.length ?? 0);
+  let count = start;
+  for (let i = 0; i < warmUp + nudges; i++) {
+    // Alternate directions so the geometry stays put.
+    await nudge(page, i % 2 === 0 ? 'ArrowRight' : 'ArrowLeft', ++count);
+  }
+  const after = await page.getAttribute(HANDLE, 'aria-valuenow');
+  const all = await page.evaluate(() => (window as Probe).__laminaLatencies ?? []);
+  const samples = all.slice(start + warmUp, start + warmUp + nudges);
+  const note = `${samples.length} nudges (±0.1 cm) after ${warmUp} warm-up; keydown → dose curves repainted; boundary ${before} → ${after} cm`;
+  return [
+    { group: EDIT_GROUP, name: `${EDIT_NAME} (p50)`, unit: 'ms', samples, note },
+    { group: EDIT_GROUP, name: `${EDIT_NAME} (p95)`, unit: 'ms', samples, stat: 'p95' },
+  ];
+}
+
+/** Holds the handle and moves the pointer back and forth (±2 px), one move per repaint. */
+async function dragRows(page: Page, moves: number): Promise<BenchRow[]> {
+  const box = await (await page.waitForSelector(HANDLE, { timeout: 10_000 })).boundingBox();
+  if (!box) return [notMeasuredRow(EDIT_GROUP, DRAG_NAME, 'the handle has no box')];
+  const x0 = box.x + box.width / 2;
+  const y0 = box.y + box.height / 2;
+  await page.mouse.move(x0, y0);
+  await page.mouse.down();
+  const warmUp = 4;
+  const start = await page.evaluate(() => (window as Probe).__laminaLatencies?.length ?? 0);
+  let count = start;
+  try {
+    for (let i = 0; i < warmUp + moves; i++) {
+      await page.mouse.move(x0 + (i % 2 === 0 ? 3 : -3), y0);
+      await waitForSamples(page, ++count);
+    }
+  } finally {
+    await page.mouse.move(x0, y0);
+    await page.mouse.up();
+  }
+  const all = await page.evaluate(() => (window as Probe).__laminaLatencies ?? []);
+  const samples = all.slice(start + warmUp, start + warmUp + moves);
+  const note = `${samples.length} pointer moves (±3 px) after ${warmUp} warm-up; pointermove → dose curves repainted`;
+  return [
+    { group: EDIT_GROUP, name: `${DRAG_NAME} (p50)`, unit: 'ms', samples, note },
+    { group: EDIT_GROUP, name: `${DRAG_NAME} (p95)`, unit: 'ms', samples, stat: 'p95' },
+  ];
 }
 
 export async function editToPaintRows(
@@ -141,31 +215,21 @@ export async function editToPaintRows(
     await page.goto(url);
     await page.waitForSelector('h1', { timeout: 30_000 });
     const handle = await page.waitForSelector(HANDLE, { timeout: 10_000 }).catch(() => null);
-    if (!handle)
+    const chart = await page.waitForSelector(CHART, { timeout: 10_000 }).catch(() => null);
+    if (!handle || !chart)
       return [
         notMeasuredRow(
           EDIT_GROUP,
           EDIT_NAME,
-          `the page exposes no slab-editor interface handle (${HANDLE})`,
+          `the page exposes no slab-editor interface handle (${HANDLE}) or depth-dose chart (${CHART})`,
         ),
       ];
-    await page.evaluate(installLatencyProbe, HANDLE);
-    await handle.focus();
-    const before = await handle.getAttribute('aria-valuenow');
-    const warmUp = 4; // even, like the nudges: the boundary ends where it started
-    let count = 0;
-    for (let i = 0; i < warmUp + nudges; i++) {
-      // Alternate directions so the geometry stays put.
-      await nudge(page, i % 2 === 0 ? 'ArrowRight' : 'ArrowLeft', ++count);
-    }
-    const after = await page.getAttribute(HANDLE, 'aria-valuenow');
-    const all = await page.evaluate(() => (window as Probe).__laminaLatencies ?? []);
-    const samples = all.slice(warmUp);
-    const note = `${samples.length} nudges (±0.1 cm) after ${warmUp} warm-up; boundary ${before} → ${after} cm`;
-    return [
-      { group: EDIT_GROUP, name: `${EDIT_NAME} (p50)`, unit: 'ms', samples, note },
-      { group: EDIT_GROUP, name: `${EDIT_NAME} (p95)`, unit: 'ms', samples, stat: 'p95' },
-    ];
+    await page.evaluate(installLatencyProbe, CHART);
+    const rows = await keyboardRows(page, nudges);
+    // Let the last full calculation land before the drag starts.
+    await page.waitForTimeout(500);
+    rows.push(...(await dragRows(page, nudges)));
+    return rows;
   } catch (e) {
     return [errorRow(EDIT_GROUP, EDIT_NAME, e)];
   } finally {

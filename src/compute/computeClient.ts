@@ -21,3 +21,20 @@ export function getComputeWorker(): Comlink.Remote<ComputeApi> {
 export function resetComputeWorker(): void {
   computeWorker.terminate();
 }
+
+/**
+ * A second worker for the quick previews during edits (fast methods only), so a preview never
+ * waits behind a full calculation still running in the first one.
+ */
+export const previewWorker = superviseWorker<ComputeApi>(
+  () =>
+    new Worker(new URL('../../workers/compute.worker.ts', import.meta.url), {
+      type: 'module',
+      name: 'lamina-preview',
+    }),
+  'preview',
+);
+
+export function getPreviewWorker(): Comlink.Remote<ComputeApi> {
+  return previewWorker.api();
+}

@@ -27,6 +27,8 @@ export interface CalcState {
   requestId: number;
   /** Wall time of the last delivered calculation (ms), for the status line. */
   elapsedMs: number | null;
+  /** Methods drawn from the previous full calculation while a quick preview is shown. */
+  updatingMethodIds: readonly string[];
 }
 
 export interface Notice {
@@ -60,7 +62,15 @@ export const useAppStore = create<AppState>()(() => ({
   theme: 'auto',
   waterSource: 'modelled',
   tab: 'dose',
-  calc: { status: 'idle', report: null, problems: [], error: null, requestId: 0, elapsedMs: null },
+  calc: {
+    status: 'idle',
+    report: null,
+    problems: [],
+    error: null,
+    requestId: 0,
+    elapsedMs: null,
+    updatingMethodIds: [],
+  },
   notice: null,
   storageMessage: null,
 }));

@@ -59,6 +59,7 @@ function useWarningBands(report: CalcReport) {
 
 export function DoseView({ report, width }: { report: CalcReport; width: number }) {
   const hidden = useAppStore((s) => s.hiddenMethods);
+  const updatingIds = useAppStore((s) => s.calc.updatingMethodIds);
   const mode = useAppStore((s) => s.normalisation);
   const { all, bands } = useWarningBands(report);
   const s = doseSeries(report, hidden, mode);
@@ -114,6 +115,7 @@ export function DoseView({ report, width }: { report: CalcReport; width: number 
           digits={mode === 'percentWaterDmax' ? 1 : 3}
           describeDepth={depthDescriber(report)}
           yInclude={mode === 'relativeToWater' ? [1] : [0]}
+          updatingIds={updatingIds}
         />
       ) : null}
       <PointTable report={report} />
@@ -124,6 +126,7 @@ export function DoseView({ report, width }: { report: CalcReport; width: number 
 
 export function CfView({ report, width }: { report: CalcReport; width: number }) {
   const hidden = useAppStore((s) => s.hiddenMethods);
+  const updatingIds = useAppStore((s) => s.calc.updatingMethodIds);
   const { all, bands } = useWarningBands(report);
   const interfaces = interfacesOf(report);
   const maxDepth = maxDepthOf(report);
@@ -149,6 +152,7 @@ export function CfView({ report, width }: { report: CalcReport; width: number })
             digits={3}
             yInclude={[1]}
             describeDepth={depthDescriber(report)}
+            updatingIds={updatingIds}
           />
           <PointTable report={report} />
         </>

@@ -31,6 +31,8 @@ export interface CurveChartProps {
   describeDepth?: (depthCm: number) => string;
   /** Draw a legend under the chart (for charts without the method legend). */
   legend?: boolean;
+  /** Series drawn from an earlier calculation while a newer one runs: dimmed, with a label. */
+  updatingIds?: readonly string[];
 }
 
 export function CurveChart(props: CurveChartProps) {
@@ -71,6 +73,8 @@ export function CurveChart(props: CurveChartProps) {
   const hz = hover === null ? null : props.depthCm[hover];
   const hx = hz === undefined || hz === null ? null : layout.x(hz);
   const bandTitle = new Map((props.bands ?? []).map((b) => [b.key, b.title]));
+  const updating = new Set(props.updatingIds ?? []);
+  const updatingLabels = props.series.filter((s) => updating.has(s.id)).map((s) => s.label);
   return (
     <figure className="chart" data-testid={props.testId} data-samples={props.depthCm.length}>
       <figcaption className="sr-only">{props.title}</figcaption>
@@ -146,7 +150,7 @@ export function CurveChart(props: CurveChartProps) {
               d={c.d}
               stroke={c.color}
               strokeDasharray={c.dash || undefined}
-              className="curve"
+              className={updating.has(c.id) ? 'curve updating' : 'curve'}
               data-method={c.id}
             />
           ))}
@@ -175,6 +179,17 @@ export function CurveChart(props: CurveChartProps) {
           onPointerMove={onMove}
           onPointerLeave={() => setHover(null)}
         />
+        {updatingLabels.length > 0 ? (
+          <text
+            x={right - 4}
+            y={plot.top + 12}
+            textAnchor="end"
+            className="updating-note"
+            data-testid="updating-note"
+          >
+            {`updating… (${updatingLabels.join(', ')})`}
+          </text>
+        ) : null}
         {layout.empty ? (
           <text
             x={(plot.left + right) / 2}
