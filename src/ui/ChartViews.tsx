@@ -1,5 +1,6 @@
 // The two comparison views: depth dose (with normalisation) and correction factors (with the
 // path's radiological depth). Both sit under the slab strip and share its depth axis.
+import { memo } from 'react';
 import type { CalcReport } from '../compute/calculateCase';
 import { displayWarnings, visibleWarnings } from '../plots/warnings';
 import { NORMALISATION_LABELS, type NormalisationMode } from '../plots/normalise';
@@ -57,7 +58,15 @@ function useWarningBands(report: CalcReport) {
   };
 }
 
-export function DoseView({ report, width }: { report: CalcReport; width: number }) {
+// Memoised: an edit re-renders the workbench around these views, but they change only with the
+// report (or their own store fields), so the case edit's frame does not redraw the charts.
+export const DoseView = memo(function DoseView({
+  report,
+  width,
+}: {
+  report: CalcReport;
+  width: number;
+}) {
   const hidden = useAppStore((s) => s.hiddenMethods);
   const updatingIds = useAppStore((s) => s.calc.updatingMethodIds);
   const mode = useAppStore((s) => s.normalisation);
@@ -122,9 +131,15 @@ export function DoseView({ report, width }: { report: CalcReport; width: number 
       <WarningList warnings={all} />
     </div>
   );
-}
+});
 
-export function CfView({ report, width }: { report: CalcReport; width: number }) {
+export const CfView = memo(function CfView({
+  report,
+  width,
+}: {
+  report: CalcReport;
+  width: number;
+}) {
   const hidden = useAppStore((s) => s.hiddenMethods);
   const updatingIds = useAppStore((s) => s.calc.updatingMethodIds);
   const { all, bands } = useWarningBands(report);
@@ -190,4 +205,4 @@ export function CfView({ report, width }: { report: CalcReport; width: number })
       <WarningList warnings={all} />
     </div>
   );
-}
+});

@@ -182,7 +182,7 @@ export function CurveChart(props: CurveChartProps) {
         {updatingLabels.length > 0 ? (
           <text
             x={right - 4}
-            y={plot.top + 12}
+            y={bottom - 6}
             textAnchor="end"
             className="updating-note"
             data-testid="updating-note"
