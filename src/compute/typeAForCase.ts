@@ -10,6 +10,7 @@ import type {
 } from '../engine/corrections/correctionTypes';
 import { modelledWaterData } from '../engine/beam/modelledBeam';
 import { etarScatterWeights } from '../engine/kernels/scatterWeights';
+import { knotInterpolatedWeights } from './etarKnotWeights';
 import { muEnRatioOfLayerForBeam } from '../engine/corrections/doseToMedium';
 import { TYPE_A_METHOD_IDS, TYPE_A_METHODS } from '../engine/corrections/typeAMethods';
 import { typeAMethodResults } from '../engine/corrections/typeAResults';
@@ -30,8 +31,12 @@ function kernelEtarWeights(c: LaminaCase): ScatterWeightFunction {
     etarScatterWeights(c.beam.energy, phantom, pointDepthCm, sideAtDepthCm, ETAR_CELL_STEP_CM);
 }
 
-/** Type-A variant choices; `doseToMedium` applies the spectrum-weighted (μ_en/ρ) ratio in the Batho forms. */
-export type TypeAVariants = CorrectionOptions & { doseToMedium?: boolean };
+/**
+ * Type-A variant choices; `doseToMedium` applies the spectrum-weighted (μ_en/ρ) ratio in the Batho
+ * forms; `etarKnotStepCm` (drag previews only) evaluates ETAR's kernel weights at knots this far
+ * apart at most and interpolates between them (src/compute/etarKnotWeights).
+ */
+export type TypeAVariants = CorrectionOptions & { doseToMedium?: boolean; etarKnotStepCm?: number };
 
 export interface TypeAOutcome {
   methods: MethodResult[];
@@ -67,12 +72,20 @@ export function typeAForCase(
   givenWaterData?: WaterData,
   variants: TypeAVariants = {},
 ): TypeAOutcome {
-  const { doseToMedium, ...options } = variants;
+  const { doseToMedium, etarKnotStepCm, ...options } = variants;
   if (doseToMedium && !options.muEnRatioOfLayer)
     options.muEnRatioOfLayer = muEnRatioOfLayerForBeam(c.beam.energy);
   if (options.etarRhoTilde === undefined && !options.etarWeights) {
     options.etarWeights = kernelEtarWeights(c);
     options.etarWeightsSource = 'scatter part of the water kernel (our Monte Carlo)';
+    if (etarKnotStepCm !== undefined && etarKnotStepCm > 0) {
+      options.etarWeights = knotInterpolatedWeights(
+        options.etarWeights,
+        ssdCmOf(c.beam.setup),
+        etarKnotStepCm,
+      );
+      options.etarWeightsSource += `, exact every ≤ ${etarKnotStepCm} cm and interpolated (preview)`;
+    }
   }
   const ids = requested ? requested.filter(isTypeAMethodId) : TYPE_A_METHOD_IDS;
   const waterData = waterDataForCase(c, givenWaterData);

@@ -1,5 +1,5 @@
 // Keeps the calculation in step with the case. Every edit asks the preview worker for the fast
-// methods on a coarse grid (drawn at once, the slower methods carried over from the last full
+// methods (ETAR with interpolated kernel weights) on a coarse grid (drawn at once, the slower methods carried over from the last full
 // result and marked as updating) and the compute worker for the full report; while a boundary is
 // being dragged only previews are asked for, and the full report once the drag ends. Both queues
 // are latest-wins: older answers are dropped and waiting requests replaced, never queued.
@@ -17,6 +17,7 @@ import type { CalcReport } from '../compute/calculateCase';
 import {
   mergePreviewReport,
   PREVIEW_DEPTH_STEP_CM,
+  PREVIEW_ETAR_KNOT_STEP_CM,
   PREVIEW_METHOD_IDS,
 } from '../compute/previewReport';
 
@@ -29,6 +30,8 @@ interface CalcInput {
   waterSource: WaterSource;
   depthStepCm: number;
   methods?: readonly string[];
+  /** Preview only: ETAR kernel weights exact at knots this far apart, interpolated between. */
+  etarKnotStepCm?: number;
 }
 
 type Tagged =
@@ -42,12 +45,13 @@ const dragging = (s: AppState) => s.history.openKey?.startsWith('drag-') ?? fals
 function calcIn(
   worker: () => ReturnType<typeof getComputeWorker>,
 ): (input: CalcInput) => Promise<Tagged> {
-  return ({ seq, raw, waterSource, depthStepCm, methods }) =>
+  return ({ seq, raw, waterSource, depthStepCm, methods, etarKnotStepCm }) =>
     worker()
       .calculate(raw, {
         waterSource: waterSource === 'modelled' ? 'modelled' : 'case',
         depthStepCm,
         ...(methods ? { methods: [...methods] } : {}),
+        ...(etarKnotStepCm !== undefined ? { typeA: { etarKnotStepCm } } : {}),
       })
       .then(
         (answer): Tagged => ({ seq, ok: true, answer }),
@@ -137,6 +141,7 @@ export function useCompute(): void {
           ...base,
           depthStepCm: PREVIEW_DEPTH_STEP_CM,
           methods: PREVIEW_METHOD_IDS,
+          etarKnotStepCm: PREVIEW_ETAR_KNOT_STEP_CM,
         });
       if (wants.full) full.request({ ...base, depthStepCm: DEPTH_STEP_CM });
     };

@@ -26,12 +26,12 @@ test('while a boundary is held the slower curves show as updating, and the relea
   await page.mouse.move(x0, y0);
   await page.mouse.down();
   for (let i = 1; i <= 5; i++) await page.mouse.move(x0 + (pxPerCm * i) / 5, y0);
-  // Held: the preview grid (0.2 cm over 20 cm → 101 depths); superposition and ETAR are carried
-  // over dimmed, the fast methods are not.
+  // Held: the preview grid (0.2 cm over 20 cm → 101 depths); the superposition is carried over
+  // dimmed, the type-A methods (ETAR included) and the pencil beam are not.
   await expect(chart).toHaveAttribute('data-samples', '101');
   await expect(page.getByTestId('updating-note')).toContainText('updating…');
   await expect(chart.locator('path.curve.updating[data-method="superposition"]')).toHaveCount(1);
-  await expect(chart.locator('path.curve.updating[data-method="etar"]')).toHaveCount(1);
+  await expect(chart.locator('path.curve.updating[data-method="etar"]')).toHaveCount(0);
   await expect(chart.locator('path.curve.updating[data-method="rtmr"]')).toHaveCount(0);
   await expect(chart.locator('path.curve.updating[data-method="pencil-beam"]')).toHaveCount(0);
 

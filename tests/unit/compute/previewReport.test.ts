@@ -4,6 +4,7 @@ import { calculateCase } from '../../../src/compute/calculateCase';
 import {
   mergePreviewReport,
   PREVIEW_DEPTH_STEP_CM,
+  PREVIEW_ETAR_KNOT_STEP_CM,
   PREVIEW_METHOD_IDS,
   resampleCurve,
   SLOW_METHOD_IDS,
@@ -33,8 +34,8 @@ function withFirstInterfaceMoved(c: LaminaCase, deltaCm: number): LaminaCase {
 }
 
 describe('preview method set', () => {
-  it('holds every type-A method but ETAR, and the pencil beam, and no slow method', () => {
-    const expected = [...TYPE_A_METHOD_IDS.filter((id) => id !== 'etar'), 'pencil-beam'];
+  it('holds every type-A method and the pencil beam, and no slow method', () => {
+    const expected = [...TYPE_A_METHOD_IDS, 'pencil-beam'];
     expect([...PREVIEW_METHOD_IDS].sort()).toEqual(expected.sort());
     for (const id of SLOW_METHOD_IDS) expect(PREVIEW_METHOD_IDS).not.toContain(id);
   });
@@ -70,6 +71,7 @@ describe('mergePreviewReport', () => {
   const preview = calculateCase(moved, {
     methods: PREVIEW_METHOD_IDS,
     depthStepCm: PREVIEW_DEPTH_STEP_CM,
+    typeA: { etarKnotStepCm: PREVIEW_ETAR_KNOT_STEP_CM },
   });
 
   it('without a full report shows the preview alone, nothing marked as updating', () => {
@@ -124,6 +126,7 @@ describe('preview accuracy', () => {
     });
     for (const p of preview.methods) {
       const f = full.methods.find((x) => x.id === p.id)!;
+      // ETAR's kernel weights are interpolated only when asked (etarKnotStepCm, not set here).
       for (let i = 0; i < p.curve.depthCm.length; i++) {
         const a = p.curve.dosePerMuCGy[i];
         const b = f.curve.dosePerMuCGy[4 * i];
