@@ -10,6 +10,7 @@ import {
 } from '../plots/curveLayout';
 import { SIDE_MARGIN } from './frame';
 import { labelRows } from '../plots/labelRows';
+import { ChartLegend, LineSwatch } from './LineSwatch';
 
 export interface CurveChartProps {
   title: string;
@@ -210,26 +211,7 @@ export function CurveChart(props: CurveChartProps) {
           .
         </p>
       ) : null}
-      {props.legend ? (
-        <div className="chart-legend">
-          {props.series.map((s) => (
-            <span key={s.id}>
-              <svg width="26" height="10" aria-hidden="true">
-                <line
-                  x1="0"
-                  x2="26"
-                  y1="5"
-                  y2="5"
-                  stroke={s.color}
-                  strokeWidth="2"
-                  strokeDasharray={s.dash || undefined}
-                />
-              </svg>
-              {s.label}
-            </span>
-          ))}
-        </div>
-      ) : null}
+      {props.legend ? <ChartLegend series={props.series} /> : null}
       {hover !== null && hx !== null && hz !== undefined && hz !== null ? (
         <div
           className="readout"
@@ -246,16 +228,7 @@ export function CurveChart(props: CurveChartProps) {
             const sd = s.sigma?.[hover];
             return (
               <div key={s.id} className="readout-row">
-                <svg width="22" height="8" aria-hidden="true">
-                  <line
-                    x1="0"
-                    x2="22"
-                    y1="4"
-                    y2="4"
-                    stroke={s.color}
-                    strokeDasharray={s.dash || undefined}
-                  />
-                </svg>
+                <LineSwatch color={s.color} dash={s.dash} widthPx={22} heightPx={8} />
                 <span>{s.label}</span>
                 <span className="num">
                   {v === null || v === undefined || !Number.isFinite(v)

@@ -4,6 +4,7 @@
 // in field side; look-ups outside the tables are clamped and reported.
 import modelledJson from '../data/generated/modelledBeams.json';
 import type { BeamEnergy } from './energies';
+import type { ModelledBeamTables } from './modelledBeamData';
 import type { WaterData } from './waterData';
 import { makeFactorLookup, makeTmrLookup } from './tmrTable';
 
@@ -16,24 +17,7 @@ export interface ModelledBeamFile {
   note: string;
   headScatterModel: string;
   referenceDosePerMuCGy: number;
-  beams: Partial<
-    Record<
-      BeamEnergy,
-      {
-        dMaxCm: number;
-        fieldsCm: number[];
-        depthsCm: number[];
-        pdd: number[][];
-        tmr: number[][];
-        psf: number[];
-        sp: number[];
-        sc: number[];
-        pdd10: number;
-        pdd2010: number;
-        tpr2010: number;
-      }
-    >
-  >;
+  beams: Partial<Record<BeamEnergy, Omit<ModelledBeamTables, 'energy'>>>;
 }
 
 export const MODELLED_BEAMS = modelledJson as unknown as ModelledBeamFile;

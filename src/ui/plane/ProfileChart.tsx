@@ -4,6 +4,7 @@ import { useState, type PointerEvent } from 'react';
 import { cellOf } from '../../plots/planeGrid';
 import { profileLayout, type ProfileSeries } from '../../plots/profileLayout';
 import { SIDE_MARGIN } from '../frame';
+import { ChartLegend, LineSwatch } from '../LineSwatch';
 
 export function ProfileChart(props: {
   title: string;
@@ -120,16 +121,7 @@ export function ProfileChart(props: {
             const v = valueAt(s.xCm, s.values, hoverX);
             return (
               <div key={s.id} className="readout-row">
-                <svg width="22" height="8" aria-hidden="true">
-                  <line
-                    x1="0"
-                    x2="22"
-                    y1="4"
-                    y2="4"
-                    stroke={s.color}
-                    strokeDasharray={s.dash || undefined}
-                  />
-                </svg>
+                <LineSwatch color={s.color} dash={s.dash} widthPx={22} heightPx={8} />
                 <span>{s.label}</span>
                 <span className="num">{Number.isFinite(v) ? v.toFixed(props.digits) : '—'}</span>
               </div>
@@ -137,24 +129,7 @@ export function ProfileChart(props: {
           })}
         </div>
       ) : null}
-      <div className="chart-legend">
-        {props.series.map((s) => (
-          <span key={s.id}>
-            <svg width="26" height="10" aria-hidden="true">
-              <line
-                x1="0"
-                x2="26"
-                y1="5"
-                y2="5"
-                stroke={s.color}
-                strokeWidth="2"
-                strokeDasharray={s.dash || undefined}
-              />
-            </svg>
-            {s.label}
-          </span>
-        ))}
-      </div>
+      <ChartLegend series={props.series} />
     </figure>
   );
 }
