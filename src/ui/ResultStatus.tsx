@@ -49,11 +49,7 @@ export function ResultStatus() {
           <button type="button" onClick={() => setTab('water')}>
             Load a measured table…
           </button>{' '}
-          <button
-            type="button"
-            onClick={() => void loadDemoTables()}
-            data-testid="quick-demo-water"
-          >
+          <button type="button" onClick={loadDemoTables} data-testid="quick-demo-water">
             Use the demo 6 MV table (invented data)
           </button>
         </div>

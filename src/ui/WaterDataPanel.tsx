@@ -163,7 +163,7 @@ export function WaterDataPanel({ width }: { width: number }) {
       ) : (
         <p className="hint">
           No measured table in this case. Load one below, or{' '}
-          <button type="button" onClick={() => void loadDemoTables()} data-testid="load-demo-water">
+          <button type="button" onClick={loadDemoTables} data-testid="load-demo-water">
             use the demo 6 MV table (invented data)
           </button>
           .

@@ -1,5 +1,7 @@
-// The demo water tables shipped with the page (invented 6 MV-like data, served from the same
-// origin): load them into the water-data draft and put them in the case.
+// The demo water tables shipped with the page (invented 6 MV-like data, bundled as text so the
+// page reads nothing at run time): load them into the water-data draft and put them in the case.
+import demoTmrCsv from '../../public/tables/demo-6mv-tmr.csv?raw';
+import demoScatterCsv from '../../public/tables/demo-6mv-scatter.csv?raw';
 import { editCase, setNotice, setWaterSource } from '../state/store';
 import {
   checkWaterDraft,
@@ -11,22 +13,15 @@ import {
 const TMR_FILE = 'demo-6mv-tmr.csv';
 const SCATTER_FILE = 'demo-6mv-scatter.csv';
 
-async function fetchText(name: string): Promise<string> {
-  const r = await fetch(new URL(`tables/${name}`, document.baseURI));
-  if (!r.ok) throw new Error(`${name}: HTTP ${r.status}`);
-  return r.text();
-}
-
-export async function loadDemoTables(): Promise<void> {
+export function loadDemoTables(): void {
   try {
-    const [csv, scatterCsv] = await Promise.all([fetchText(TMR_FILE), fetchText(SCATTER_FILE)]);
     patchWaterDraft({
       ...EMPTY_WATER_DRAFT,
       kind: 'tmr',
       fileName: TMR_FILE,
-      csv,
+      csv: demoTmrCsv,
       scatterFileName: SCATTER_FILE,
-      scatterCsv,
+      scatterCsv: demoScatterCsv,
     });
     const check = checkWaterDraft(useWaterDraft.getState());
     if (check.ok) {
