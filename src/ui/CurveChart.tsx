@@ -11,6 +11,7 @@ import {
 import { SIDE_MARGIN } from './frame';
 import { labelRows } from '../plots/labelRows';
 import { ChartLegend, LineSwatch } from './LineSwatch';
+import { XTicks, YTicks } from './AxisTicks';
 
 export interface CurveChartProps {
   title: string;
@@ -102,22 +103,8 @@ export function CurveChart(props: CurveChartProps) {
             <title>{bandTitle.get(b.key)}</title>
           </rect>
         ))}
-        {layout.yTicks.map((t) => (
-          <g key={`y${t.value}`}>
-            <line x1={plot.left} x2={right} y1={t.px} y2={t.px} className="grid" />
-            <text x={plot.left - 6} y={t.px + 4} textAnchor="end" className="tick-label">
-              {t.label}
-            </text>
-          </g>
-        ))}
-        {layout.xTicks.map((t) => (
-          <g key={`x${t.value}`}>
-            <line x1={t.px} x2={t.px} y1={bottom} y2={bottom + 5} className="axis-line" />
-            <text x={t.px} y={bottom + 18} textAnchor="middle" className="tick-label">
-              {t.label}
-            </text>
-          </g>
-        ))}
+        <YTicks ticks={layout.yTicks} leftPx={plot.left} gridRightPx={right} />
+        <XTicks ticks={layout.xTicks} bottomPx={bottom} />
         {layout.interfaces.map((x, i) => (
           <line key={`i${i}`} x1={x} x2={x} y1={plot.top} y2={bottom} className="interface" />
         ))}

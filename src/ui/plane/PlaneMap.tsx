@@ -6,6 +6,7 @@ import { colourBar, doseMapLayout, parseRgb, planeRaster } from '../../plots/dos
 import { indexMapper, isodoseLines } from '../../plots/isodose';
 import { bilinearAt, type PlaneGrid } from '../../plots/planeGrid';
 import { SIDE_MARGIN } from '../frame';
+import { XTicks, YTicks } from '../AxisTicks';
 
 export interface PlaneMapProps {
   title: string;
@@ -193,22 +194,8 @@ export function PlaneMap(props: PlaneMapProps) {
             </g>
           );
         })}
-        {layout.yTicks.map((t) => (
-          <g key={`y${t.value}`}>
-            <line x1={plot.left - 5} x2={plot.left} y1={t.px} y2={t.px} className="axis-line" />
-            <text x={plot.left - 8} y={t.px + 4} textAnchor="end" className="tick-label">
-              {t.label}
-            </text>
-          </g>
-        ))}
-        {layout.xTicks.map((t) => (
-          <g key={`x${t.value}`}>
-            <line x1={t.px} x2={t.px} y1={bottom} y2={bottom + 5} className="axis-line" />
-            <text x={t.px} y={bottom + 18} textAnchor="middle" className="tick-label">
-              {t.label}
-            </text>
-          </g>
-        ))}
+        <YTicks ticks={layout.yTicks} leftPx={plot.left} />
+        <XTicks ticks={layout.xTicks} bottomPx={bottom} />
         <rect
           x={plot.left}
           y={plot.top}

@@ -5,6 +5,7 @@ import { cellOf } from '../../plots/planeGrid';
 import { profileLayout, type ProfileSeries } from '../../plots/profileLayout';
 import { SIDE_MARGIN } from '../frame';
 import { ChartLegend, LineSwatch } from '../LineSwatch';
+import { XTicks, YTicks } from '../AxisTicks';
 
 export function ProfileChart(props: {
   title: string;
@@ -41,22 +42,8 @@ export function ProfileChart(props: {
     <figure className="chart" data-testid="plane-profile">
       <figcaption className="sr-only">{props.title}</figcaption>
       <svg width={props.width} height={props.height} role="img" aria-label={props.title}>
-        {layout.yTicks.map((t) => (
-          <g key={`y${t.value}`}>
-            <line x1={plot.left} x2={right} y1={t.px} y2={t.px} className="grid" />
-            <text x={plot.left - 6} y={t.px + 4} textAnchor="end" className="tick-label">
-              {t.label}
-            </text>
-          </g>
-        ))}
-        {layout.xTicks.map((t) => (
-          <g key={`x${t.value}`}>
-            <line x1={t.px} x2={t.px} y1={bottom} y2={bottom + 5} className="axis-line" />
-            <text x={t.px} y={bottom + 18} textAnchor="middle" className="tick-label">
-              {t.label}
-            </text>
-          </g>
-        ))}
+        <YTicks ticks={layout.yTicks} leftPx={plot.left} gridRightPx={right} />
+        <XTicks ticks={layout.xTicks} bottomPx={bottom} />
         <line x1={plot.left} x2={right} y1={bottom} y2={bottom} className="axis-line" />
         <line x1={plot.left} x2={plot.left} y1={plot.top} y2={bottom} className="axis-line" />
         <text
