@@ -13,16 +13,13 @@ import { readFileSync, writeFileSync, mkdirSync } from 'node:fs';
 import { simulatePointKernel } from '../src/engine/montecarlo/pointKernel';
 import { BEAM_ENERGIES } from '../src/engine/beam/energies';
 import { beamSpectrum } from '../src/engine/kernels/spectrum';
-import {
-  polyenergeticKernel,
-  kernelWeights,
-  type MonoKernel,
-} from '../src/engine/kernels/polyenergeticKernel';
+import { polyenergeticKernel, kernelWeights } from '../src/engine/kernels/polyenergeticKernel';
 import { cylinderCumulative } from '../src/engine/kernels/cylinderCumulative';
 import { buildPencilKernel } from '../src/engine/superposition/pencilKernel';
 import {
   KERNEL_FORMAT_DATE,
   KERNEL_FORMAT_VERSION,
+  monoKernelsOfFile,
   PENCIL_DEPTHS_CM,
   PENCIL_RADII_CM,
   type BeamKernelFile,
@@ -83,18 +80,6 @@ function simulateMono(histories: number, seed: number): MonoKernelFile {
   };
 }
 
-function monoKernels(file: MonoKernelFile): MonoKernel[] {
-  return file.kernels.map((k) => ({
-    label: `${k.energyMeV} MeV`,
-    energyMeV: k.energyMeV,
-    radialEdgesCm: Float64Array.from(file.radialEdgesCm),
-    polarBins: file.polarBins,
-    primary: Float64Array.from(k.primary),
-    scatter: Float64Array.from(k.scatter),
-    escapedFraction: k.escapedFraction,
-  }));
-}
-
 function main(): void {
   mkdirSync(OUT_DIR, { recursive: true });
   const monoPath = `${OUT_DIR}/pointKernelsMono.json`;
@@ -109,7 +94,7 @@ function main(): void {
     mono = simulateMono(histories, seed);
     writeFileSync(monoPath, JSON.stringify(mono));
   }
-  const kernels = monoKernels(mono);
+  const kernels = monoKernelsOfFile(mono);
   const provenance = {
     formatVersion: KERNEL_FORMAT_VERSION,
     formatDate: KERNEL_FORMAT_DATE,

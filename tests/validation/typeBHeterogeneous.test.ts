@@ -73,16 +73,16 @@ describe('modelled water data', () => {
     expect(b.pdd10).toBeLessThanOrEqual(69);
   });
 
-  it('18 MV 10 × 10 at SSD 100: PDD(10) 76–82 % and d_max 2.8–4.2 cm (photon-only kernel)', () => {
-    // Typical published 18 MV beams, from memory: PDD(10) ≈ 79 %, d_max 3.0–3.5 cm. Those beams
-    // carry contaminant electrons that pull d_max towards the surface; these kernels have none,
-    // and the project's Monte Carlo of the same beam peaks at 3.6–4.0 cm (its plateau is within
-    // 0.5 % from 3.4 to 4.6 cm), so the upper bound here is 4.2 cm instead of 3.8 cm.
+  it('18 MV 10 × 10 at SSD 100: PDD(10) 76–82 % and d_max 2.8–3.8 cm', () => {
+    // Typical published 18 MV beams, from memory: PDD(10) 76–82 %, d_max 2.8–3.8 cm. The 18 MV
+    // spectrum is a derived stand-in tuned on PDD(10) only, so d_max is an independent check.
+    // Photon-only kernels: contaminant electrons, which pull a measured d_max towards the
+    // surface, are not modelled.
     const b = modelledBeamTables('18MV');
     expect(b.pdd10).toBeGreaterThanOrEqual(76);
     expect(b.pdd10).toBeLessThanOrEqual(82);
     expect(b.dMaxCm).toBeGreaterThanOrEqual(2.8);
-    expect(b.dMaxCm).toBeLessThanOrEqual(4.2);
+    expect(b.dMaxCm).toBeLessThanOrEqual(3.8);
   });
 
   it.each([...BEAM_ENERGIES])(

@@ -1,6 +1,7 @@
 // Shapes of the generated kernel files in src/engine/data/generated/ (written by
 // scripts/generateKernels.ts) and the grids they share.
 import type { BeamEnergy } from '../beam/energies';
+import type { MonoKernel } from './polyenergeticKernel';
 
 export const KERNEL_FORMAT_VERSION = 1;
 export const KERNEL_FORMAT_DATE = '2026-12-01';
@@ -54,6 +55,19 @@ export interface PencilKernelFile extends Provenance {
   depthsCm: number[];
   radiiCm: number[];
   beams: Partial<Record<BeamEnergy, { values: number[] }>>;
+}
+
+/** The monoenergetic kernels of a stored file as kernel tables (ascending energy). */
+export function monoKernelsOfFile(file: MonoKernelFile): MonoKernel[] {
+  return file.kernels.map((k) => ({
+    label: `${k.energyMeV} MeV`,
+    energyMeV: k.energyMeV,
+    radialEdgesCm: Float64Array.from(file.radialEdgesCm),
+    polarBins: file.polarBins,
+    primary: Float64Array.from(k.primary),
+    scatter: Float64Array.from(k.scatter),
+    escapedFraction: k.escapedFraction,
+  }));
 }
 
 function range(from: number, to: number, step: number): number[] {

@@ -1,27 +1,11 @@
 // Sampling photon energies from the beam spectra: a bin by its probability, then uniform within
 // the bin. Spectra: Mohan, Chui & Lidofsky, Med. Phys. 12, 592 (1985) for 4, 6, 10, 15 MV (lower
-// edge of the first bin 0); 18 MV a derived stand-in (approximate); Co-60 in-beam spectrum
-// (Rogers et al., NRC 1987/88; first bin starts at 0.01 MeV).
-import spectra from '../data/spectra.json';
+// edge of the first bin 0); 18 MV a derived stand-in (approximate, with its fitted tuning
+// applied by spectrumBins()); Co-60 in-beam spectrum (Rogers et al., NRC 1987/88; first bin
+// starts at 0.01 MeV).
 import type { BeamEnergy } from '../beam/energies';
+import { spectrumBins } from '../kernels/spectrum';
 import type { Rng } from './rng';
-
-interface SpectrumJson {
-  upperEdgeMeV: number[];
-  probability?: number[];
-  countsPerBin?: number[];
-  firstLowerEdgeMeV?: number;
-  source: string;
-}
-
-const SPECTRUM_KEY: Record<BeamEnergy, string> = {
-  'Co-60': 'Co60',
-  '4MV': '4MV',
-  '6MV': '6MV',
-  '10MV': '10MV',
-  '15MV': '15MV',
-  '18MV': '18MV',
-};
 
 export interface SpectrumSampler {
   /** Bin edges (MeV), length bins + 1. */
@@ -36,13 +20,11 @@ export interface SpectrumSampler {
 }
 
 export function makeSpectrumSampler(energy: BeamEnergy): SpectrumSampler {
-  const s = (spectra as Record<string, SpectrumJson>)[SPECTRUM_KEY[energy]];
-  if (!s) throw new RangeError(`no spectrum for ${energy}`);
-  const weights = s.probability ?? s.countsPerBin ?? [];
-  const n = s.upperEdgeMeV.length;
-  const edges = new Float64Array(n + 1);
-  edges[0] = s.firstLowerEdgeMeV ?? 0;
-  for (let i = 0; i < n; i++) edges[i + 1] = s.upperEdgeMeV[i] as number;
+  // The same bins and (tuned) weights as the kernels and TERMA use.
+  const bins = spectrumBins(energy);
+  const weights = bins.weight;
+  const n = weights.length;
+  const edges = bins.edgesMeV;
   const total = weights.reduce((a, b) => a + b, 0);
   const cumulative = new Float64Array(n);
   let acc = 0;
@@ -58,8 +40,8 @@ export function makeSpectrumSampler(energy: BeamEnergy): SpectrumSampler {
     edgesMeV: edges,
     cumulative,
     meanEnergyMeV: mean,
-    approximate: energy === '18MV',
-    source: s.source,
+    approximate: bins.approximate,
+    source: bins.source,
     sample(rng) {
       const xi = rng.next();
       let lo = 0;

@@ -48,33 +48,46 @@ export interface ReferencePoint {
 
 const references = new Map<string, ReferencePoint>();
 
-/** Depth and raw dose of the maximum on the central axis in water, 10 × 10 cm² at SSD 100 cm. */
-export function referencePoint(engine: TypeBEngine, energy: BeamEnergy): ReferencePoint {
-  const key = `${engine}|${energy}`;
-  const hit = references.get(key);
-  if (hit) return hit;
-  const depths = Array.from({ length: 201 }, (_, i) => i * 0.04);
-  const dose = typeBRawDose(
-    engine,
-    energy,
-    waterPhantom(40),
-    { ssdCm: 100, fieldXCm: 10, fieldYCm: 10 },
-    depths,
-    [0],
-  );
+/** Depths searched for the maximum: 0–8 cm in 0.04 cm steps. */
+export const REFERENCE_SEARCH_DEPTHS_CM: readonly number[] = Array.from(
+  { length: 201 },
+  (_, i) => i * 0.04,
+);
+
+/** Maximum of a dose curve on an evenly spaced depth grid: parabola through the 3 samples around it. */
+export function maximumOnGrid(
+  depthsCm: ArrayLike<number>,
+  dose: ArrayLike<number>,
+): ReferencePoint {
+  const stepCm = (depthsCm[1] as number) - (depthsCm[0] as number);
   let best = 1;
-  for (let i = 1; i < depths.length - 1; i++)
+  for (let i = 1; i < depthsCm.length - 1; i++)
     if ((dose[i] as number) > (dose[best] as number)) best = i;
-  // Parabola through the three samples around the maximum.
   const a = dose[best - 1] as number;
   const b = dose[best] as number;
   const c = dose[best + 1] as number;
   const denom = a - 2 * b + c;
   const shift = denom < 0 ? (0.5 * (a - c)) / denom : 0;
-  const ref = {
-    dMaxCm: (depths[best] as number) + shift * 0.04,
+  return {
+    dMaxCm: (depthsCm[best] as number) + shift * stepCm,
     rawDose: b - 0.25 * (a - c) * shift,
   };
+}
+
+/** Depth and raw dose of the maximum on the central axis in water, 10 × 10 cm² at SSD 100 cm. */
+export function referencePoint(engine: TypeBEngine, energy: BeamEnergy): ReferencePoint {
+  const key = `${engine}|${energy}`;
+  const hit = references.get(key);
+  if (hit) return hit;
+  const dose = typeBRawDose(
+    engine,
+    energy,
+    waterPhantom(40),
+    { ssdCm: 100, fieldXCm: 10, fieldYCm: 10 },
+    REFERENCE_SEARCH_DEPTHS_CM,
+    [0],
+  );
+  const ref = maximumOnGrid(REFERENCE_SEARCH_DEPTHS_CM, dose);
   references.set(key, ref);
   return ref;
 }
