@@ -2,7 +2,8 @@
 // repeated runs, printed as a table and written to bench/results.json. Runs every
 // bench/*.bench.ts module, then the built-in figures: type-A curve time, bundle size, cold page
 // load and edit-to-paint latency in Chromium. Options: --repeats N (bench modules),
-// --no-browser (skip build, bundle and Chromium), --only TEXT (modules whose file name contains it).
+// --no-browser (skip build, bundle and Chromium), --only TEXT (modules whose file name contains it),
+// --browser-only (only the page figures: bundle, cold load, edit-to-paint).
 import { writeFileSync } from 'node:fs';
 import { cpus } from 'node:os';
 import { dirname, join } from 'node:path';
@@ -83,12 +84,14 @@ async function main(argv: string[]): Promise<number> {
   }
   const only = option(argv, '--only');
   const rows: BenchRow[] = [];
+  const browserOnly = argv.includes('--browser-only');
   for (const file of benchModuleFiles(BENCH_DIR)) {
-    if (only !== undefined && !file.includes(only)) continue;
+    if (browserOnly || (only !== undefined && !file.includes(only))) continue;
     log(`bench module ${file.split('/').pop()}…`);
     rows.push(...(await runBenchModule(file, repeats, log)));
   }
-  if (only === undefined) {
+  if (browserOnly) rows.push(...(await browserRows()));
+  else if (only === undefined) {
     log('type-A curves (calculateCase, demo case)…');
     rows.push(...(await guarded('type-A curves', 'calculateCase', () => typeACurveRows())));
     if (!argv.includes('--no-browser')) rows.push(...(await browserRows()));

@@ -16,6 +16,12 @@ export async function launchChromium(): Promise<Browser> {
 type Probe = Window & {
   __laminaHeadingMs?: number;
   __laminaLatencies?: number[];
+  /** Input handled (capture listener) → the curves' paint (ms). */
+  __laminaDispatchLatencies?: number[];
+  /** Input event's timestamp → its listener running: the wait for the page to take the input (ms). */
+  __laminaDispatchWaits?: number[];
+  /** 1 when the new curves were painted in the first frame after the input was handled, else 0. */
+  __laminaFirstFrame?: number[];
 };
 
 /**
@@ -104,12 +110,17 @@ const DRAG_NAME = 'edit-to-paint, pointer drag of a layer interface';
 /**
  * Listens for keydown and pointermove (while a button is held); when the depth-dose chart's
  * curve paths next change (a new result drawn), notes the time from the input event to the
- * paint that follows. (No named inner functions: see HEADING_PROBE.)
+ * paint that follows, the time from the input's handling to that paint, and whether that paint
+ * was the first frame after the input was handled (the rAF callbacks of one frame share their
+ * timestamp). (No named inner functions: see HEADING_PROBE.)
  */
 function installLatencyProbe(chartSelector: string): void {
   const w = window as Probe;
   w.__laminaLatencies = [];
-  let pending: number | null = null;
+  w.__laminaDispatchLatencies = [];
+  w.__laminaFirstFrame = [];
+  w.__laminaDispatchWaits = [];
+  let pending: { eventMs: number; handledMs: number; firstFrame: number } | null = null;
   const obs = new MutationObserver((records) => {
     if (pending === null) return;
     const inChart = records.some((r) => {
@@ -117,11 +128,17 @@ function installLatencyProbe(chartSelector: string): void {
       return (el?.closest(chartSelector) ?? null) !== null;
     });
     if (!inChart) return;
-    const t0 = pending;
+    const p = pending;
     pending = null;
-    requestAnimationFrame(() => {
+    requestAnimationFrame((frameMs) => {
       const ch = new MessageChannel();
-      ch.port1.onmessage = () => w.__laminaLatencies?.push(performance.now() - t0);
+      ch.port1.onmessage = () => {
+        const now = performance.now();
+        w.__laminaDispatchLatencies?.push(now - p.handledMs);
+        w.__laminaDispatchWaits?.push(p.handledMs - p.eventMs);
+        w.__laminaFirstFrame?.push(p.firstFrame === frameMs ? 1 : 0);
+        w.__laminaLatencies?.push(now - p.eventMs);
+      };
       ch.port2.postMessage(0);
     });
   });
@@ -131,14 +148,73 @@ function installLatencyProbe(chartSelector: string): void {
     childList: true,
     subtree: true,
   });
-  document.addEventListener('keydown', (e) => (pending = e.timeStamp), { capture: true });
-  document.addEventListener(
-    'pointermove',
-    (e) => {
-      if (e.buttons !== 0) pending = e.timeStamp;
+  for (const type of ['keydown', 'pointermove'])
+    document.addEventListener(
+      type,
+      (e) => {
+        if (e.type === 'pointermove' && (e as PointerEvent).buttons === 0) return;
+        const p = { eventMs: e.timeStamp, handledMs: performance.now(), firstFrame: -1 };
+        pending = p;
+        requestAnimationFrame((frameMs) => (p.firstFrame = frameMs));
+      },
+      { capture: true },
+    );
+}
+
+/** The three figures of the samples `from` … `from + count`. */
+async function latencyRows(
+  page: Page,
+  name: string,
+  from: number,
+  count: number,
+  note: string,
+): Promise<BenchRow[]> {
+  const all = await page.evaluate(() => {
+    const w = window as Probe;
+    return {
+      event: w.__laminaLatencies ?? [],
+      handled: w.__laminaDispatchLatencies ?? [],
+      first: w.__laminaFirstFrame ?? [],
+      wait: w.__laminaDispatchWaits ?? [],
+    };
+  });
+  const samples = all.event.slice(from, from + count);
+  const handled = all.handled.slice(from, from + count);
+  const first = all.first.slice(from, from + count);
+  const wait = all.wait.slice(from, from + count);
+  const share = first.length ? (100 * first.reduce((a, b) => a + b, 0)) / first.length : NaN;
+  return [
+    { group: EDIT_GROUP, name: `${name} (p50)`, unit: 'ms', samples, note },
+    { group: EDIT_GROUP, name: `${name} (p95)`, unit: 'ms', samples, stat: 'p95' },
+    {
+      group: EDIT_GROUP,
+      name: `${name}, input handled → painted (p50)`,
+      unit: 'ms',
+      samples: handled,
     },
-    { capture: true },
-  );
+    {
+      group: EDIT_GROUP,
+      name: `${name}, input handled → painted (p95)`,
+      unit: 'ms',
+      samples: handled,
+      stat: 'p95',
+      note: 'from the input listener running to the paint; excludes the wait for the input to be dispatched',
+    },
+    {
+      group: EDIT_GROUP,
+      name: `${name}, input event → input handled (p50)`,
+      unit: 'ms',
+      samples: wait,
+      note: 'the browser holds pointer moves for the next frame (rAF-aligned input): up to one frame of waiting before the page sees the input',
+    },
+    {
+      group: EDIT_GROUP,
+      name: `${name}, painted in the first frame after the input`,
+      unit: '%',
+      samples: [share],
+      note: `${first.reduce((a, b) => a + b, 0)} of ${first.length} edits`,
+    },
+  ];
 }
 
 async function waitForSamples(page: Page, expected: number) {
@@ -166,13 +242,8 @@ async function keyboardRows(page: Page, nudges: number): Promise<BenchRow[]> {
     await nudge(page, i % 2 === 0 ? 'ArrowRight' : 'ArrowLeft', ++count);
   }
   const after = await page.getAttribute(HANDLE, 'aria-valuenow');
-  const all = await page.evaluate(() => (window as Probe).__laminaLatencies ?? []);
-  const samples = all.slice(start + warmUp, start + warmUp + nudges);
-  const note = `${samples.length} nudges (±0.1 cm) after ${warmUp} warm-up; keydown → dose curves repainted; boundary ${before} → ${after} cm`;
-  return [
-    { group: EDIT_GROUP, name: `${EDIT_NAME} (p50)`, unit: 'ms', samples, note },
-    { group: EDIT_GROUP, name: `${EDIT_NAME} (p95)`, unit: 'ms', samples, stat: 'p95' },
-  ];
+  const note = `${nudges} nudges (±0.1 cm) after ${warmUp} warm-up; keydown → dose curves repainted; boundary ${before} → ${after} cm`;
+  return latencyRows(page, EDIT_NAME, start + warmUp, nudges, note);
 }
 
 /** Holds the handle and moves the pointer back and forth (±2 px), one move per repaint. */
@@ -195,13 +266,8 @@ async function dragRows(page: Page, moves: number): Promise<BenchRow[]> {
     await page.mouse.move(x0, y0);
     await page.mouse.up();
   }
-  const all = await page.evaluate(() => (window as Probe).__laminaLatencies ?? []);
-  const samples = all.slice(start + warmUp, start + warmUp + moves);
-  const note = `${samples.length} pointer moves (±3 px) after ${warmUp} warm-up; pointermove → dose curves repainted`;
-  return [
-    { group: EDIT_GROUP, name: `${DRAG_NAME} (p50)`, unit: 'ms', samples, note },
-    { group: EDIT_GROUP, name: `${DRAG_NAME} (p95)`, unit: 'ms', samples, stat: 'p95' },
-  ];
+  const note = `${moves} pointer moves (±3 px) after ${warmUp} warm-up; pointermove → dose curves repainted`;
+  return latencyRows(page, DRAG_NAME, start + warmUp, moves, note);
 }
 
 export async function editToPaintRows(

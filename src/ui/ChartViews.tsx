@@ -1,6 +1,6 @@
 // The two comparison views: depth dose (with normalisation) and correction factors (with the
 // path's radiological depth). Both sit under the slab strip and share its depth axis.
-import { memo } from 'react';
+import { memo, useDeferredValue, useMemo } from 'react';
 import type { CalcReport } from '../compute/calculateCase';
 import { displayWarnings, visibleWarnings } from '../plots/warnings';
 import { NORMALISATION_LABELS, type NormalisationMode } from '../plots/normalise';
@@ -39,13 +39,22 @@ function maxDepthOf(report: CalcReport): number {
   return report.layers[report.layers.length - 1]?.bottomCm ?? 1;
 }
 
+/**
+ * The report for the tables under a chart (point values, warnings): deferred, so an edit's frame
+ * draws the curves first and the tables follow in the next idle moment.
+ */
+function useTableReport(report: CalcReport) {
+  const slow = useDeferredValue(report);
+  const warnings = useMemo(() => displayWarnings(slow.warnings), [slow]);
+  return { slow, warnings };
+}
+
 function useWarningBands(report: CalcReport) {
   const hidden = useAppStore((s) => s.hiddenWarningMethods);
   const hiddenMethods = useAppStore((s) => s.hiddenMethods);
   const all = displayWarnings(report.warnings);
   const shown = visibleWarnings(all, [...hidden, ...hiddenMethods]);
   return {
-    all,
     bands: shown
       .filter((w) => w.range)
       .map((w) => ({
@@ -70,7 +79,8 @@ export const DoseView = memo(function DoseView({
   const hidden = useAppStore((s) => s.hiddenMethods);
   const updatingIds = useAppStore((s) => s.calc.updatingMethodIds);
   const mode = useAppStore((s) => s.normalisation);
-  const { all, bands } = useWarningBands(report);
+  const { bands } = useWarningBands(report);
+  const tables = useTableReport(report);
   const s = doseSeries(report, hidden, mode);
   return (
     <div className="view">
@@ -127,8 +137,8 @@ export const DoseView = memo(function DoseView({
           updatingIds={updatingIds}
         />
       ) : null}
-      <PointTable report={report} />
-      <WarningList warnings={all} />
+      <PointTable report={tables.slow} />
+      <WarningList warnings={tables.warnings} />
     </div>
   );
 });
@@ -142,7 +152,8 @@ export const CfView = memo(function CfView({
 }) {
   const hidden = useAppStore((s) => s.hiddenMethods);
   const updatingIds = useAppStore((s) => s.calc.updatingMethodIds);
-  const { all, bands } = useWarningBands(report);
+  const { bands } = useWarningBands(report);
+  const tables = useTableReport(report);
   const interfaces = interfacesOf(report);
   const maxDepth = maxDepthOf(report);
   return (
@@ -169,7 +180,7 @@ export const CfView = memo(function CfView({
             describeDepth={depthDescriber(report)}
             updatingIds={updatingIds}
           />
-          <PointTable report={report} />
+          <PointTable report={tables.slow} />
         </>
       ) : null}
       <CurveChart
@@ -202,7 +213,7 @@ export const CfView = memo(function CfView({
         digits={2}
         yInclude={[0]}
       />
-      <WarningList warnings={all} />
+      <WarningList warnings={tables.warnings} />
     </div>
   );
 });

@@ -1,3 +1,4 @@
+import { memo } from 'react';
 // Every method's correction factor and dose per MU at each point of interest: one row per
 // method, one column pair per point. A missing value is a dash with its reason (the method's
 // flags at that point), never NaN.
@@ -31,7 +32,7 @@ function Value({
   return <>{v.toFixed(digits)}</>;
 }
 
-export function PointTable({ report }: { report: CalcReport }) {
+export const PointTable = memo(function PointTable({ report }: { report: CalcReport }) {
   const hidden = useAppStore((s) => s.hiddenMethods);
   const methods = report.methods.filter((m) => !hidden.includes(m.id));
   const styles = methodStyles(report);
@@ -122,4 +123,4 @@ export function PointTable({ report }: { report: CalcReport }) {
       </table>
     </div>
   );
-}
+});

@@ -7,6 +7,7 @@ import { depthTicks } from '../plots/depthAxis';
 import { slabLayout } from '../plots/slabLayout';
 import { boundariesCm } from '../state/editorCase';
 import { moveBoundary } from '../state/layerOps';
+import { requestSpeculation } from '../state/speculation';
 import { editCase, endGesture, useAppStore } from '../state/store';
 import { SIDE_MARGIN } from './frame';
 import { addPoint } from './pointOps';
@@ -42,10 +43,11 @@ export function SlabStrip({ width }: { width: number }) {
     const box = svgRef.current?.getBoundingClientRect();
     return layout.x.invert(clientX - (box?.left ?? 0));
   };
-  const onHandleDown = (e: PointerEvent<SVGRectElement>) => {
+  const onHandleDown = (k: number) => (e: PointerEvent<SVGRectElement>) => {
     e.preventDefault();
     e.currentTarget.setPointerCapture(e.pointerId);
     setFrozenDepthCm(layout.totalCm);
+    requestSpeculation(k);
   };
   const onHandleMove = (k: number) => (e: PointerEvent<SVGRectElement>) => {
     if (!e.currentTarget.hasPointerCapture(e.pointerId)) return;
@@ -65,7 +67,9 @@ export function SlabStrip({ width }: { width: number }) {
     else if (e.key === 'ArrowLeft' || e.key === 'ArrowUp') delta = -step;
     else return;
     e.preventDefault();
-    editCase((c) => moveBoundary(c, k, (boundariesCm(c)[k] ?? 0) + delta));
+    // One gesture while the key is held (auto-repeat): one undo step, previews while it lasts
+    // and the full calculation once the keys settle.
+    editCase((c) => moveBoundary(c, k, (boundariesCm(c)[k] ?? 0) + delta), `nudge-${k}`);
   };
   const ticks = depthTicks(layout.x);
   const rulerY = BAND_TOP + BAND_H;
@@ -179,7 +183,9 @@ export function SlabStrip({ width }: { width: number }) {
           aria-orientation="horizontal"
           data-testid={`boundary-${h.k}`}
           onKeyDown={onHandleKey(h.k)}
+          onFocus={() => requestSpeculation(h.k)}
           onKeyUp={endGesture}
+          onBlur={endGesture}
         >
           <line
             x1={h.x}
@@ -202,7 +208,7 @@ export function SlabStrip({ width }: { width: number }) {
             width={14}
             height={BAND_H + 8}
             className="handle-hit"
-            onPointerDown={onHandleDown}
+            onPointerDown={onHandleDown(h.k)}
             onPointerMove={onHandleMove(h.k)}
             onPointerUp={onHandleUp}
             onPointerCancel={onHandleUp}

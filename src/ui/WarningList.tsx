@@ -1,9 +1,14 @@
+import { memo } from 'react';
 // Charged-particle-equilibrium and other warnings of the calculation: message, depth range,
 // methods concerned, and the explanation on demand. Filterable per method.
 import { visibleWarnings, type DisplayWarning } from '../plots/warnings';
 import { toggleWarningMethod, useAppStore } from '../state/store';
 
-export function WarningList({ warnings }: { warnings: readonly DisplayWarning[] }) {
+export const WarningList = memo(function WarningList({
+  warnings,
+}: {
+  warnings: readonly DisplayWarning[];
+}) {
   const hidden = useAppStore((s) => s.hiddenWarningMethods);
   if (warnings.length === 0) return null;
   const methodIds = [...new Set(warnings.flatMap((w) => w.methods))];
@@ -52,4 +57,4 @@ export function WarningList({ warnings }: { warnings: readonly DisplayWarning[] 
       </ul>
     </section>
   );
-}
+});

@@ -1,8 +1,11 @@
 // Keeps the calculation in step with the case. Every edit asks the preview worker for the fast
-// methods (ETAR with interpolated kernel weights) on a coarse grid (drawn at once, the slower methods carried over from the last full
-// result and marked as updating) and the compute worker for the full report; while a boundary is
-// being dragged only previews are asked for, and the full report once the drag ends. Both queues
-// are latest-wins: older answers are dropped and waiting requests replaced, never queued.
+// methods (ETAR with interpolated kernel weights) on a coarse grid (drawn at once, the slower
+// methods carried over from the last full result and marked as updating) and the compute worker
+// for the full report; while a boundary is being dragged only previews are asked for, and the full
+// report once the drag ends. Both queues are latest-wins: older answers are dropped and waiting
+// requests replaced, never queued. While a boundary is held (pointer down or keyboard focus) the
+// preview worker also prepares the previews of its nearby snapped positions; an edit that lands on
+// one is drawn from that in the same frame as the input.
 import { useEffect } from 'react';
 import { getComputeWorker, getPreviewWorker } from '../compute/computeClient';
 import { installDebugHooks } from '../compute/debugHooks';
@@ -11,6 +14,13 @@ import { toCaseFile } from '../state/editorCase';
 import { makeLatestOnly } from '../state/latestOnly';
 import { makeShowGate } from '../state/showGate';
 import { setCalc, useAppStore, type AppState, type WaterSource } from '../state/store';
+import { boundariesCm } from '../state/editorCase';
+import {
+  boundaryCandidates,
+  makeRecentCache,
+  onSpeculationRequest,
+  SPECULATION_RADIUS_CM,
+} from '../state/speculation';
 import type { LaminaCase } from '../io/caseSchema';
 import type { ComputeApi } from '../compute/computeApi';
 import type { CalcReport } from '../compute/calculateCase';
@@ -40,7 +50,32 @@ type Tagged =
 /** Curve resolution of the full calculation. */
 export const DEPTH_STEP_CM = 0.05;
 
-const dragging = (s: AppState) => s.history.openKey?.startsWith('drag-') ?? false;
+/** A boundary is being moved: dragged with the pointer, or nudged with a key held down. */
+const dragging = (s: AppState) =>
+  (s.history.openKey?.startsWith('drag-') || s.history.openKey?.startsWith('nudge-')) ?? false;
+const nudging = (s: AppState) => s.history.openKey?.startsWith('nudge-') ?? false;
+
+/**
+ * After a key nudge the full calculation waits this long for another nudge (ms): a run of
+ * presses shows quick previews and ends with one full calculation, instead of a full calculation
+ * per press landing in the middle of the next one.
+ */
+const NUDGE_SETTLE_MS = 250;
+
+/** Options of every preview calculation (the live ones and the prepared ones alike). */
+const PREVIEW_OPTIONS = {
+  depthStepCm: PREVIEW_DEPTH_STEP_CM,
+  methods: PREVIEW_METHOD_IDS,
+  etarKnotStepCm: PREVIEW_ETAR_KNOT_STEP_CM,
+} as const;
+
+/** Previews kept for instant reuse (about 15 kB each). */
+const PREVIEW_CACHE_ENTRIES = 400;
+
+/** The exact input a preview was computed for: the case file and the water data chosen. */
+function previewKey(raw: LaminaCase, waterSource: WaterSource): string {
+  return `${waterSource}|${JSON.stringify(raw)}`;
+}
 
 function calcIn(
   worker: () => ReturnType<typeof getComputeWorker>,
@@ -117,13 +152,11 @@ export function useCompute(): void {
       },
     );
 
-    const preview = makeLatestOnly(calcIn(getPreviewWorker), (result) => {
-      // Failures and invalid cases are reported by the full calculation.
-      const t = result.ok ? result.value : null;
-      // Before the first full report there is nothing to carry over: wait for it instead of
-      // showing a partial method set.
-      if (!t || !t.ok || !t.answer.ok || !lastFull || !gate.preview(t.seq)) return;
-      const merged = mergePreviewReport(t.answer.report, lastFull);
+    const cache = makeRecentCache<CalcReport>(PREVIEW_CACHE_ENTRIES);
+    const keys = new Map<number, string>();
+
+    const showPreview = (report: CalcReport, full: CalcReport) => {
+      const merged = mergePreviewReport(report, full);
       setCalc({
         status: 'running',
         report: merged.report,
@@ -131,34 +164,107 @@ export function useCompute(): void {
         error: null,
         updatingMethodIds: merged.updatingIds,
       });
+    };
+
+    const preview = makeLatestOnly(calcIn(getPreviewWorker), (result) => {
+      // Failures and invalid cases are reported by the full calculation.
+      const t = result.ok ? result.value : null;
+      if (!t || !t.ok || !t.answer.ok) return;
+      const key = keys.get(t.seq);
+      keys.delete(t.seq);
+      if (key !== undefined) cache.set(key, t.answer.report);
+      // Before the first full report there is nothing to carry over: wait for it instead of
+      // showing a partial method set.
+      if (!lastFull || !gate.preview(t.seq)) return;
+      showPreview(t.answer.report, lastFull);
     });
+
+    // Preparing the previews of a held boundary: one at a time through the preview worker, nearest
+    // position first; a newer request (another boundary, or the same one re-centred) ends the
+    // older sweep.
+    let sweep = 0;
+    let sweepAround: { k: number; depthCm: number } | null = null;
+    const speculate = async (k: number) => {
+      const id = ++sweep;
+      // Let the frame of the input that asked for this paint first.
+      await new Promise((resolve) => setTimeout(resolve, 0));
+      const s = useAppStore.getState();
+      const doc = s.history.present;
+      const around = boundariesCm(doc)[k];
+      if (id !== sweep || around === undefined) return;
+      sweepAround = { k, depthCm: around };
+      for (const candidate of boundaryCandidates(doc, k, around)) {
+        if (id !== sweep) return;
+        const raw = toCaseFile(candidate);
+        const key = previewKey(raw, s.waterSource);
+        if (cache.has(key)) continue;
+        try {
+          const answer = await getPreviewWorker().calculate(raw, {
+            waterSource: s.waterSource === 'modelled' ? 'modelled' : 'case',
+            depthStepCm: PREVIEW_OPTIONS.depthStepCm,
+            methods: [...PREVIEW_OPTIONS.methods],
+            typeA: { etarKnotStepCm: PREVIEW_OPTIONS.etarKnotStepCm },
+          });
+          if (answer.ok) cache.set(key, answer.report);
+        } catch {
+          // The worker was lost: the live path reports it; preparing stops here.
+          return;
+        }
+      }
+    };
+    /** Re-centre the sweep when the held boundary has moved half the prepared radius. */
+    const followSweep = (s: AppState) => {
+      if (!sweepAround) return;
+      const at = boundariesCm(s.history.present)[sweepAround.k];
+      if (at !== undefined && Math.abs(at - sweepAround.depthCm) >= SPECULATION_RADIUS_CM / 2)
+        void speculate(sweepAround.k);
+    };
 
     const ask = (s: AppState, wants: { full: boolean; preview: boolean }) => {
       seq += 1;
       const base = { seq, raw: toCaseFile(s.history.present), waterSource: s.waterSource };
-      if (wants.preview)
-        preview.request({
-          ...base,
-          depthStepCm: PREVIEW_DEPTH_STEP_CM,
-          methods: PREVIEW_METHOD_IDS,
-          etarKnotStepCm: PREVIEW_ETAR_KNOT_STEP_CM,
-        });
+      if (wants.preview) {
+        const key = previewKey(base.raw, base.waterSource);
+        const ready = lastFull ? cache.get(key) : undefined;
+        if (ready && lastFull && gate.preview(seq)) showPreview(ready, lastFull);
+        else {
+          keys.set(seq, key);
+          for (const old of keys.keys()) if (old < seq - 8) keys.delete(old);
+          preview.request({ ...base, ...PREVIEW_OPTIONS });
+        }
+      }
       if (wants.full) full.request({ ...base, depthStepCm: DEPTH_STEP_CM });
     };
 
     ask(useAppStore.getState(), { full: true, preview: false });
+    let settle: ReturnType<typeof setTimeout> | undefined;
     const unsubscribe = useAppStore.subscribe((s, prev) => {
-      if (s.history.present !== prev.history.present || s.waterSource !== prev.waterSource)
+      if (s.history.present !== prev.history.present || s.waterSource !== prev.waterSource) {
+        clearTimeout(settle);
         ask(s, { full: !dragging(s), preview: true });
-      // A drag that ends asks for the full calculation.
-      else if (dragging(prev) && !dragging(s)) ask(s, { full: true, preview: false });
+        followSweep(s);
+      }
+      // A drag that ends asks for the full calculation; a nudge once the keys have settled.
+      else if (dragging(prev) && !dragging(s)) {
+        clearTimeout(settle);
+        if (nudging(prev))
+          settle = setTimeout(
+            () => ask(useAppStore.getState(), { full: true, preview: false }),
+            NUDGE_SETTLE_MS,
+          );
+        else ask(s, { full: true, preview: false });
+      }
     });
     // Retry after a failed calculation (e.g. the worker was lost): the same case again.
     const stopRetry = onRecalcRequest(() =>
       ask(useAppStore.getState(), { full: true, preview: false }),
     );
+    const stopSpeculation = onSpeculationRequest((k) => void speculate(k));
     installDebugHooks();
     return () => {
+      clearTimeout(settle);
+      sweep += 1;
+      stopSpeculation();
       stopRetry();
       unsubscribe();
       full.cancel();
