@@ -20,6 +20,8 @@ type Probe = Window & {
   __laminaDispatchLatencies?: number[];
   /** Input event's timestamp → its listener running: the wait for the page to take the input (ms). */
   __laminaDispatchWaits?: number[];
+  /** 'hover': pointer moves without a button count too (the crosshair reference). */
+  __laminaProbeHover?: boolean;
   /** 1 when the new curves were painted in the first frame after the input was handled, else 0. */
   __laminaFirstFrame?: number[];
 };
@@ -144,7 +146,8 @@ function installLatencyProbe(chartSelector: string): void {
   });
   obs.observe(document.body, {
     attributes: true,
-    attributeFilter: ['d'],
+    // 'd': curve paths; 'x1': the crosshair line (the hover reference).
+    attributeFilter: ['d', 'x1'],
     childList: true,
     subtree: true,
   });
@@ -152,7 +155,8 @@ function installLatencyProbe(chartSelector: string): void {
     document.addEventListener(
       type,
       (e) => {
-        if (e.type === 'pointermove' && (e as PointerEvent).buttons === 0) return;
+        const buttons = (e as PointerEvent).buttons;
+        if (e.type === 'pointermove' && buttons === 0 && w.__laminaProbeHover !== true) return;
         const p = { eventMs: e.timeStamp, handledMs: performance.now(), firstFrame: -1 };
         pending = p;
         requestAnimationFrame((frameMs) => (p.firstFrame = frameMs));
@@ -161,7 +165,7 @@ function installLatencyProbe(chartSelector: string): void {
     );
 }
 
-/** The three figures of the samples `from` … `from + count`. */
+/** The figures of the samples `from` … `from + count`. */
 async function latencyRows(
   page: Page,
   name: string,
@@ -270,6 +274,38 @@ async function dragRows(page: Page, moves: number): Promise<BenchRow[]> {
   return latencyRows(page, DRAG_NAME, start + warmUp, moves, note);
 }
 
+const HOVER_NAME = 'reference: crosshair follows the pointer over the chart (no calculation)';
+
+/**
+ * The floor of the harness: the same probe for the cheapest possible change, the chart's crosshair
+ * line following a hovering pointer (one React state update, no calculation). Its event → paint
+ * time is what any edit would cost at best, frame wait included.
+ */
+async function hoverRows(page: Page, moves: number): Promise<BenchRow[]> {
+  const box = await (
+    await page.waitForSelector(`${CHART} rect.hit`, { timeout: 10_000 })
+  ).boundingBox();
+  if (!box) return [notMeasuredRow(EDIT_GROUP, HOVER_NAME, 'the chart has no hit area')];
+  const x0 = box.x + box.width / 2;
+  const y0 = box.y + box.height / 2;
+  await page.mouse.move(x0, y0);
+  await page.evaluate(() => ((window as Probe).__laminaProbeHover = true));
+  const warmUp = 4;
+  const start = await page.evaluate(() => (window as Probe).__laminaLatencies?.length ?? 0);
+  let count = start;
+  try {
+    for (let i = 0; i < warmUp + moves; i++) {
+      // ±12 px: the readout moves by a few 0.05 cm samples each time.
+      await page.mouse.move(x0 + (i % 2 === 0 ? 12 : -12), y0);
+      await waitForSamples(page, ++count);
+    }
+  } finally {
+    await page.evaluate(() => ((window as Probe).__laminaProbeHover = false));
+  }
+  const note = `${moves} pointer moves (±12 px) after ${warmUp} warm-up; pointermove → crosshair repainted`;
+  return latencyRows(page, HOVER_NAME, start + warmUp, moves, note);
+}
+
 export async function editToPaintRows(
   browser: Browser,
   url: string,
@@ -295,6 +331,8 @@ export async function editToPaintRows(
     // Let the last full calculation land before the drag starts.
     await page.waitForTimeout(500);
     rows.push(...(await dragRows(page, nudges)));
+    await page.waitForTimeout(500);
+    rows.push(...(await hoverRows(page, nudges)));
     return rows;
   } catch (e) {
     return [errorRow(EDIT_GROUP, EDIT_NAME, e)];

@@ -2,6 +2,7 @@
 // bands, ±1σ bands, one path per series, points of interest, and a crosshair readout that
 // lists every series' value at the hovered depth (pointer or arrow keys).
 import { useId, useState, type KeyboardEvent, type PointerEvent } from 'react';
+import { flushSync } from 'react-dom';
 import {
   curveChartLayout,
   nearestIndex,
@@ -60,7 +61,8 @@ export function CurveChart(props: CurveChartProps) {
   const onMove = (e: PointerEvent<SVGRectElement>) => {
     const box = e.currentTarget.ownerSVGElement?.getBoundingClientRect();
     const z = layout.x.invert(e.clientX - (box?.left ?? 0));
-    setHover(nearestIndex(props.depthCm, z));
+    // Synchronously: the crosshair is drawn in the frame of the pointer move, not the next one.
+    flushSync(() => setHover(nearestIndex(props.depthCm, z)));
   };
   const onKey = (e: KeyboardEvent<SVGSVGElement>) => {
     const n = props.depthCm.length;
