@@ -209,7 +209,9 @@ async function latencyRows(
       name: `${name}, input event → input handled (p50)`,
       unit: 'ms',
       samples: wait,
-      note: 'the browser holds pointer moves for the next frame (rAF-aligned input): up to one frame of waiting before the page sees the input',
+      note: name.includes('key')
+        ? 'key presses are dispatched at once; the wait for the next frame falls after the input is handled'
+        : 'the browser holds pointer moves for the next frame (rAF-aligned input): up to one frame of waiting before the page sees the input',
     },
     {
       group: EDIT_GROUP,
