@@ -69,8 +69,11 @@ const PREVIEW_OPTIONS = {
   etarKnotStepCm: PREVIEW_ETAR_KNOT_STEP_CM,
 } as const;
 
-/** Previews kept for instant reuse (about 15 kB each). */
-const PREVIEW_CACHE_ENTRIES = 400;
+/**
+ * Previews kept for instant reuse: about 40 kB of JSON each on the chest preset, so 120 entries
+ * (three sweeps of a held boundary) stay under about 10 MB.
+ */
+const PREVIEW_CACHE_ENTRIES = 120;
 
 /** The exact input a preview was computed for: the case file and the water data chosen. */
 function previewKey(raw: LaminaCase, waterSource: WaterSource): string {
