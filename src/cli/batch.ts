@@ -1,8 +1,10 @@
 // Batch mode: `npm run calc -- --batch a.json b.json …` (or several files) prints one summary
-// row per case or plan; exit code 1 when any check verdict fails, 2 when a file cannot be read
-// or is invalid (problems printed to stderr), else 0.
+// row per case or plan; exit code 1 when any check verdict fails or is uncertain (a Monte Carlo
+// difference within the tolerance ± 2σ: not shown within tolerance), 2 when a file cannot be
+// read or is invalid (problems printed to stderr), else 0.
 import { readFileSync } from 'node:fs';
 import { summarizeCheck } from '../engine/check/checkSummary';
+import type { Verdict } from '../engine/check/tolerance';
 import { describeProblems } from '../io/caseFile';
 import type { PlanCalcOptions } from '../compute/calculatePlan';
 import { calculateDocument, loadDocument } from './checkCommand';
@@ -15,7 +17,7 @@ export interface BatchRow {
   method: string | null;
   largestDiffPercent: number | null;
   comparisons: number;
-  verdict: 'pass' | 'fail' | 'none' | 'invalid';
+  verdict: Verdict | 'invalid';
 }
 
 export function batchRows(files: readonly string[], options: PlanCalcOptions): BatchRow[] {
@@ -57,7 +59,7 @@ export function batchRows(files: readonly string[], options: PlanCalcOptions): B
 
 export function batchExitCode(rows: readonly BatchRow[]): number {
   if (rows.some((r) => r.verdict === 'invalid')) return 2;
-  return rows.some((r) => r.verdict === 'fail') ? 1 : 0;
+  return rows.some((r) => r.verdict === 'fail' || r.verdict === 'uncertain') ? 1 : 0;
 }
 
 export function formatBatch(rows: readonly BatchRow[]): string {
@@ -77,7 +79,8 @@ export function formatBatch(rows: readonly BatchRow[]): string {
   );
   const fails = rows.filter((r) => r.verdict === 'fail').length;
   const invalid = rows.filter((r) => r.verdict === 'invalid').length;
-  return `${body}\n\n${rows.length} file(s): ${fails} outside tolerance, ${invalid} invalid`;
+  const uncertain = rows.filter((r) => r.verdict === 'uncertain').length;
+  return `${body}\n\n${rows.length} file(s): ${fails} outside tolerance, ${uncertain > 0 ? `${uncertain} uncertain (Monte Carlo: run longer), ` : ''}${invalid} invalid`;
 }
 
 export function runBatch(

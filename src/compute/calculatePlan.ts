@@ -55,7 +55,12 @@ export function checkInputOf(
     methods: report.methods.map((m) => ({
       id: m.id,
       label: m.label,
-      points: m.points.map((p) => ({ id: p.id, dosePerMuCGy: p.dosePerMuCGy })),
+      // The Monte Carlo's statistical 1σ travels with its dose per MU (deterministic methods have none).
+      points: m.points.map((p) =>
+        p.sigmaDosePerMuCGy === undefined
+          ? { id: p.id, dosePerMuCGy: p.dosePerMuCGy }
+          : { id: p.id, dosePerMuCGy: p.dosePerMuCGy, sigmaDosePerMuCGy: p.sigmaDosePerMuCGy },
+      ),
     })),
   };
 }

@@ -2,12 +2,18 @@
 // of the prescription, the dose the planning system's MU give, their percent differences from the
 // planning values and a verdict; then the dose summed over beams at each shared point. Numbers in,
 // numbers out: the dose per MU of each method at each point comes from the dose methods.
+import {
+  quadratureSum,
+  sigmaOfDoseCGy,
+  sigmaOfMu,
+  sigmaOfPercentDifference,
+  verdictWithSigma,
+} from './checkUncertainty';
 import { doseForMu, muForDose } from './monitorUnits';
 import { isHeterogeneousPath, type PathLayer } from './heterogeneousPath';
 import {
   percentDifference,
   toleranceFor,
-  verdictOf,
   worstVerdict,
   type Tolerances,
   type Verdict,
@@ -23,7 +29,12 @@ export interface CheckPointInput {
 export interface CheckMethodInput {
   id: string;
   label: string;
-  points: { id: string; dosePerMuCGy: number | null }[];
+  points: {
+    id: string;
+    dosePerMuCGy: number | null;
+    /** 1σ of dosePerMuCGy (statistical, Monte Carlo only). */
+    sigmaDosePerMuCGy?: number | undefined;
+  }[];
 }
 
 export interface CheckBeamInput {
@@ -61,6 +72,19 @@ export interface MethodPointCheck {
   /** Dose at the point for the planning system's MU (cGy). */
   doseCGy: number | null;
   doseDiffPercent: number | null;
+  /**
+   * Present only for a method with a statistical 1σ (Monte Carlo): the σ of the dose per MU, of
+   * the check MU (σ_MU / MU = σ_(D/MU) / (D/MU)), of the dose for the planning MU (cGy) and of
+   * the two differences (percent points). Null where the value itself is missing.
+   */
+  sigma?: {
+    dosePerMuCGy: number;
+    mu: number | null;
+    muDiffPercent: number | null;
+    doseCGy: number | null;
+    doseDiffPercent: number | null;
+  };
+  /** See verdictWithSigma: with a σ, "uncertain" when within the tolerance ± 2σ. */
   verdict: Verdict;
 }
 
@@ -99,6 +123,11 @@ export interface TotalPointCheck {
     methodId: string;
     doseCGy: number | null;
     diffPercent: number | null;
+    /**
+     * 1σ of the summed dose (cGy), beams' runs being independent (quadrature), and of the
+     * difference (percent points); present only for a method with a σ, null when a beam lacks it.
+     */
+    sigma?: { doseCGy: number | null; diffPercent: number | null };
     verdict: Verdict;
   }[];
 }
@@ -160,14 +189,18 @@ function checkBeam(
       planningDoseCGy: p.planningDoseCGy ?? null,
       planningMu: mu,
       methods: methods.map(({ id }): MethodPointCheck => {
-        const dpm =
-          beam.methods.find((m) => m.id === id)?.points.find((q) => q.id === p.id)?.dosePerMuCGy ??
-          null;
+        const at = beam.methods.find((m) => m.id === id)?.points.find((q) => q.id === p.id);
+        const dpm = at?.dosePerMuCGy ?? null;
+        const sigmaDpm = at?.sigmaDosePerMuCGy;
         const toDeliver = prescribedDoseCGy ?? p.planningDoseCGy ?? null;
         const checkMu = toDeliver === null ? null : muForDose(toDeliver, dpm);
         const doseCGy = mu === null ? null : doseForMu(mu, dpm);
         const muDiffPercent = percentDifference(checkMu, mu);
         const doseDiffPercent = percentDifference(doseCGy, p.planningDoseCGy);
+        const sigma =
+          sigmaDpm === undefined || !Number.isFinite(sigmaDpm)
+            ? undefined
+            : sigmaOfCheck(checkMu, dpm, sigmaDpm, mu, doseCGy, p.planningDoseCGy);
         return {
           methodId: id,
           dosePerMuCGy: dpm,
@@ -175,9 +208,10 @@ function checkBeam(
           muDiffPercent,
           doseCGy,
           doseDiffPercent,
+          ...(sigma ? { sigma } : {}),
           verdict: worstVerdict([
-            verdictOf(muDiffPercent, tolerancePercent),
-            verdictOf(doseDiffPercent, tolerancePercent),
+            verdictWithSigma(muDiffPercent, sigma?.muDiffPercent, tolerancePercent),
+            verdictWithSigma(doseDiffPercent, sigma?.doseDiffPercent, tolerancePercent),
           ]),
         };
       }),
@@ -195,6 +229,26 @@ function checkBeam(
     planningMu: beamMu,
     points,
     verdictByMethod,
+  };
+}
+
+/** The σ block of a method point with a statistical 1σ of its dose per MU. */
+function sigmaOfCheck(
+  checkMu: number | null,
+  dpm: number | null,
+  sigmaDpm: number,
+  planningMu: number | null,
+  doseCGy: number | null,
+  planningDoseCGy: number | undefined,
+): NonNullable<MethodPointCheck['sigma']> {
+  const sMu = sigmaOfMu(checkMu, dpm, sigmaDpm);
+  const sDose = doseCGy === null ? null : sigmaOfDoseCGy(planningMu, sigmaDpm);
+  return {
+    dosePerMuCGy: sigmaDpm,
+    mu: sMu,
+    muDiffPercent: sigmaOfPercentDifference(sMu, planningMu),
+    doseCGy: sDose,
+    doseDiffPercent: sigmaOfPercentDifference(sDose, planningDoseCGy),
   };
 }
 
@@ -231,11 +285,24 @@ function totalsOf(beams: readonly BeamCheck[], methods: readonly { id: string }[
             ? null
             : sumOrNull(present.map((p) => p.methods[k]?.doseCGy ?? null));
         const diffPercent = percentDifference(doseCGy, planningDoseCGy);
+        const parts = present.map((p) => p.methods[k]);
+        const withSigma = parts.some((m) => m?.sigma !== undefined);
+        const sigmaDose =
+          withSigma && doseCGy !== null
+            ? quadratureSum(parts.map((m) => m?.sigma?.doseCGy ?? null))
+            : null;
+        const sigma = withSigma
+          ? {
+              doseCGy: sigmaDose,
+              diffPercent: sigmaOfPercentDifference(sigmaDose, planningDoseCGy),
+            }
+          : undefined;
         return {
           methodId: id,
           doseCGy,
           diffPercent,
-          verdict: verdictOf(diffPercent, tolerancePercent),
+          ...(sigma ? { sigma } : {}),
+          verdict: verdictWithSigma(diffPercent, sigma?.diffPercent, tolerancePercent),
         };
       }),
     };

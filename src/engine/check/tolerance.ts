@@ -3,7 +3,11 @@
 // al. 2011) suggests for non-IMRT secondary checks — about 2 % for a simple homogeneous geometry
 // and up to about 5 % where heterogeneity is handled differently (from memory).
 
-export type Verdict = 'pass' | 'fail' | 'none';
+/**
+ * "uncertain": a Monte Carlo difference within the tolerance ± 2σ of its statistics, neither
+ * shown inside nor outside (see verdictWithSigma); run more histories.
+ */
+export type Verdict = 'pass' | 'fail' | 'uncertain' | 'none';
 
 export interface Tolerances {
   /** Action level for a path through water-like material only (%). */
@@ -38,12 +42,13 @@ export function verdictOf(differencePercent: number | null, tolerancePercent: nu
   return Math.abs(differencePercent) <= tolerancePercent + 1e-12 ? 'pass' : 'fail';
 }
 
-/** The worst of several verdicts: any fail fails; all none gives none. */
+/** The worst of several verdicts: any fail fails, then uncertain, then pass; all none gives none. */
 export function worstVerdict(verdicts: Iterable<Verdict>): Verdict {
   let out: Verdict = 'none';
   for (const v of verdicts) {
     if (v === 'fail') return 'fail';
-    if (v === 'pass') out = 'pass';
+    if (v === 'uncertain') out = 'uncertain';
+    else if (v === 'pass' && out === 'none') out = 'pass';
   }
   return out;
 }

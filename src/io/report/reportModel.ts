@@ -6,6 +6,7 @@ import type { PlanReport } from '../../compute/calculatePlan';
 import type { PlanCheck } from '../../engine/check/planCheck';
 import type { Verdict } from '../../engine/check/tolerance';
 import type { LaminaPlan } from '../planFile';
+import { monteCarloRecordLines } from './monteCarloNote';
 import { depthDoseFigure, type ReportFigure } from './reportFigure';
 import {
   beamVerdictHeaders,
@@ -51,6 +52,8 @@ export interface ReportInput {
 export const VERDICT_TEXT: Record<Verdict, string> = {
   pass: 'within tolerance',
   fail: 'OUTSIDE tolerance',
+  uncertain:
+    'UNCERTAIN: within the tolerance ± 2σ of the Monte Carlo statistics (run more histories)',
   none: 'not compared (no planning value)',
 };
 
@@ -132,7 +135,9 @@ function beamBlocks(
             p.id,
             fmt(water?.dosePerMuCGy, 4),
             fmt(p.cf, 4),
-            fmt(p.dosePerMuCGy, 4),
+            p.sigmaDosePerMuCGy === undefined || fmt(p.dosePerMuCGy, 4) === '—'
+              ? fmt(p.dosePerMuCGy, 4)
+              : `${fmt(p.dosePerMuCGy, 4)} ± ${fmt(p.sigmaDosePerMuCGy, 4)}`,
             p.flags.join('; '),
           ];
         }),
@@ -178,6 +183,7 @@ export function buildReportModel(input: ReportInput): ReportModel {
   });
   blocks.push({ kind: 'heading', text: 'Point check per beam' });
   blocks.push({ kind: 'table', headers: POINT_TABLE_HEADERS, rows: pointTableRows(check) });
+  for (const text of monteCarloRecordLines(result.beams)) blocks.push({ kind: 'paragraph', text });
   if (check.beams.length > 1) {
     blocks.push({ kind: 'heading', text: 'Total at each point (sum over beams)' });
     blocks.push({ kind: 'table', headers: TOTAL_TABLE_HEADERS, rows: totalTableRows(check) });

@@ -7,6 +7,14 @@ const f = (v: number | null | undefined, digits: number): string =>
 const signed = (v: number | null | undefined): string =>
   v === null || v === undefined || !Number.isFinite(v) ? '—' : `${v > 0 ? '+' : ''}${v.toFixed(2)}`;
 
+/** "value ± σ" when the value carries a statistical 1σ (Monte Carlo), else the value alone. */
+const pm = (
+  text: string,
+  sigma: number | null | undefined,
+  digits: number,
+  hasSigma: boolean,
+): string => (!hasSigma || text === '—' ? text : `${text} ± ${f(sigma, digits)}`);
+
 export const POINT_TABLE_HEADERS = [
   'beam',
   'point',
@@ -27,21 +35,25 @@ export function pointTableRows(check: PlanCheck): string[][] {
   const label = new Map(check.methods.map((m) => [m.id, m.label]));
   return check.beams.flatMap((b) =>
     b.points.flatMap((p) =>
-      p.methods.map((m) => [
-        b.id,
-        p.pointId,
-        p.depthCm.toFixed(2),
-        label.get(m.methodId) ?? m.methodId,
-        f(m.dosePerMuCGy, 4),
-        f(m.mu, 1),
-        f(p.planningMu, 1),
-        signed(m.muDiffPercent),
-        f(m.doseCGy, 1),
-        f(p.planningDoseCGy, 1),
-        signed(m.doseDiffPercent),
-        String(p.tolerancePercent),
-        m.verdict,
-      ]),
+      p.methods.map((m) => {
+        const s = m.sigma;
+        const has = s !== undefined;
+        return [
+          b.id,
+          p.pointId,
+          p.depthCm.toFixed(2),
+          label.get(m.methodId) ?? m.methodId,
+          pm(f(m.dosePerMuCGy, 4), s?.dosePerMuCGy, 4, has),
+          pm(f(m.mu, 1), s?.mu, 1, has),
+          f(p.planningMu, 1),
+          pm(signed(m.muDiffPercent), s?.muDiffPercent, 2, has),
+          pm(f(m.doseCGy, 1), s?.doseCGy, 1, has),
+          f(p.planningDoseCGy, 1),
+          pm(signed(m.doseDiffPercent), s?.doseDiffPercent, 2, has),
+          String(p.tolerancePercent),
+          m.verdict,
+        ];
+      }),
     ),
   );
 }
@@ -62,9 +74,9 @@ export function totalTableRows(check: PlanCheck): string[][] {
     t.methods.map((m) => [
       t.pointId,
       label.get(m.methodId) ?? m.methodId,
-      f(m.doseCGy, 1),
+      pm(f(m.doseCGy, 1), m.sigma?.doseCGy, 1, m.sigma !== undefined),
       f(t.planningDoseCGy, 1),
-      signed(m.diffPercent),
+      pm(signed(m.diffPercent), m.sigma?.diffPercent, 2, m.sigma !== undefined),
       String(t.tolerancePercent),
       t.missingInBeams.length > 0 ? `not in ${t.missingInBeams.join(', ')}` : m.verdict,
     ]),

@@ -12,9 +12,20 @@ import {
   TOTAL_TABLE_HEADERS,
 } from '../../io/report/reportTables';
 
+const CELL_TEXT: Record<string, string> = {
+  fail: 'FAIL',
+  pass: 'pass',
+  uncertain: 'run longer (±2σ)',
+};
+
 function VerdictCell({ v }: { v: string }) {
   return (
-    <td className={`verdict verdict-${v}`}>{v === 'fail' ? 'FAIL' : v === 'pass' ? 'pass' : v}</td>
+    <td
+      className={`verdict verdict-${v}`}
+      title={v === 'uncertain' ? VERDICT_TEXT.uncertain : undefined}
+    >
+      {CELL_TEXT[v] ?? v}
+    </td>
   );
 }
 
@@ -91,7 +102,13 @@ export function VerdictBanner({ check }: { check: PlanCheck }) {
   return (
     <p className={`check-verdict verdict-${v}`} role="status" data-testid="check-verdict">
       <strong>
-        {v === 'pass' ? 'Within tolerance' : v === 'fail' ? 'Outside tolerance' : 'Not compared'}
+        {v === 'pass'
+          ? 'Within tolerance'
+          : v === 'fail'
+            ? 'Outside tolerance'
+            : v === 'uncertain'
+              ? 'Not decided'
+              : 'Not compared'}
       </strong>
       {' — '}
       {m ? `decided by ${m.label}` : 'no method computed'}; {VERDICT_TEXT[v]}.
@@ -108,7 +125,7 @@ export function CheckResults({ check }: { check: PlanCheck }) {
     <>
       <VerdictGrid check={check} />
       <RowsTable
-        caption="Per beam: dose per MU, MU for the dose, and differences from the planning system"
+        caption="Per beam: dose per MU, MU for the dose, and differences from the planning system (Monte Carlo: value ± 1σ)"
         headers={POINT_TABLE_HEADERS}
         rows={pointTableRows(check)}
         testId="check-point-table"

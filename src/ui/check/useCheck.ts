@@ -10,6 +10,7 @@ import type { LaminaCase } from '../../io/caseSchema';
 import { PLAN_FORMAT, PLAN_VERSION } from '../../io/planSchema';
 import type { LaminaPlan } from '../../io/planFile';
 import { toCaseFile } from '../../state/editorCase';
+import { useShownReport } from '../montecarlo/useShownReport';
 import { onRecalcRequest } from '../../state/recalc';
 import { useAppStore } from '../../state/store';
 import { patchExtraBeam, useCheckStore, type CheckState } from './checkStore';
@@ -89,9 +90,14 @@ export function useExtraBeamCalculations(): void {
 /** Problem path of a beam whose calculation was lost with the compute worker. */
 export const WORKER_PROBLEM_PATH = '(calculation)';
 
+/**
+ * The check of the plan whose first beam is the case being edited. The first beam's report is the
+ * drawn one: the latest calculation plus the page's Monte Carlo run (with its 1σ) while that run
+ * belongs to the case as it is now — a run left stale by an edit is not checked.
+ */
 export function useCheckView(): CheckView | null {
   const present = useAppStore((s) => s.history.present);
-  const report = useAppStore((s) => s.calc.report);
+  const report = useShownReport();
   const s = useCheckStore();
   return useMemo(() => {
     if (!report) return null;
