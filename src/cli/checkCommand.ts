@@ -4,6 +4,7 @@ import { calculatePlan, type PlanCalcOptions, type PlanReport } from '../compute
 import { DEFAULT_TOLERANCES } from '../engine/check/tolerance';
 import { PLAN_FORMAT } from '../io/planSchema';
 import { validatePlan, type PlanParseResult } from '../io/planFile';
+import { monteCarloRecordLines } from '../io/report/monteCarloNote';
 import { formatCheck } from './formatCheck';
 import { formatReport } from './formatReport';
 
@@ -80,6 +81,9 @@ export function textOf(result: PlanReport, isPlan: boolean): string {
   }
   parts.push('');
   parts.push(formatCheck(result.check));
+  // The Monte Carlo run behind any "± σ" in the check: histories, batches, seed, meaning of σ.
+  const mcLines = monteCarloRecordLines(result.beams);
+  if (mcLines.length > 0) parts.push('', ...mcLines);
   return parts.join('\n');
 }
 
