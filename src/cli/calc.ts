@@ -8,7 +8,7 @@ import { WATER_TABLE_USAGE, waterTableFromFlags } from './waterTableArgs';
 import { MC_USAGE, mcOptionsOf } from './mcArgs';
 
 const USAGE = `Usage: npm run calc -- <case.json | plan.json> [--json] [--methods id,id,...]
-       npm run calc -- --batch <file> <file> ...   (one summary row per file; exit 1 if any check fails)
+       npm run calc -- --batch <file> <file> ...   (one summary row per file; exit 1 if any check fails or is uncertain)
   --json          print one JSON document (format "lamina.calc" with a "check" section; a plan
                   file prints "lamina.plancalc")
   --methods LIST  comma-separated method ids to compute (default: all available)

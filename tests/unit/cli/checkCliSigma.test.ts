@@ -1,5 +1,6 @@
 import { spawnSync } from 'node:child_process';
 import { describe, expect, it } from 'vitest';
+import { batchExitCode, formatBatch, type BatchRow } from '../../../src/cli/batch';
 
 function calc(extra: string[]) {
   return spawnSync(
@@ -63,5 +64,26 @@ describe('the CLI check with a Monte Carlo run', () => {
     const a = (m?.sigma?.mu as number) / (m?.mu as number);
     const b = (m?.sigma?.dosePerMuCGy as number) / (m?.dosePerMuCGy as number);
     expect(Math.abs(a - b) / b).toBeLessThan(1e-9);
+  });
+});
+
+describe('batch mode with an uncertain Monte Carlo verdict', () => {
+  const row = (verdict: BatchRow['verdict']): BatchRow => ({
+    file: `${verdict}.json`,
+    name: verdict,
+    beams: 1,
+    method: 'monte-carlo',
+    largestDiffPercent: 1.5,
+    comparisons: 2,
+    verdict,
+  });
+
+  it('batchExitCode(...) exits 1 when a check is uncertain: it was not shown within tolerance', () => {
+    expect(batchExitCode([row('pass')])).toBe(0);
+    expect(batchExitCode([row('pass'), row('uncertain')])).toBe(1);
+    expect(batchExitCode([row('uncertain'), row('invalid')])).toBe(2);
+    expect(formatBatch([row('pass'), row('uncertain')])).toMatch(
+      /2 file\(s\): 0 outside tolerance, 1 uncertain \(Monte Carlo: run longer\), 0 invalid/,
+    );
   });
 });
