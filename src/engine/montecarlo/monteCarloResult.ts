@@ -128,13 +128,17 @@ export function finalizeMonteCarlo(
       const dose = atPoints.value[i] as number;
       const sigma = atPoints.sigma[i] as number;
       const flags: string[] = [];
-      if (!(sigma / dose <= 0.02)) flags.push('MC 1σ > 2 %');
+      // A value whose 1σ is unknown (fewer than two batches, or no dose scored) is not shown as a
+      // number: with σ = 0 it would read as exact in the point check.
+      const known = Number.isFinite(sigma) && Number.isFinite(dose);
+      if (!known) flags.push('MC 1σ unknown (too few batches)');
+      else if (!(sigma / dose <= 0.02)) flags.push('MC 1σ > 2 %');
       return {
         id: p.id,
         depthCm: p.depthCm,
-        cf: finite(cfPoints.value[i] as number),
-        dosePerMuCGy: finite(dose),
-        sigmaDosePerMuCGy: Number.isFinite(sigma) ? sigma : 0,
+        cf: known ? finite(cfPoints.value[i] as number) : null,
+        dosePerMuCGy: known ? dose : null,
+        sigmaDosePerMuCGy: known ? sigma : 0,
         flags,
       };
     }),

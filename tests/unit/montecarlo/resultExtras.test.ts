@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { runMonteCarlo } from '../../../src/engine/montecarlo/runMonteCarlo';
+import {
+  accumulatorsOf,
+  batchTasksOf,
+  runMonteCarlo,
+} from '../../../src/engine/montecarlo/runMonteCarlo';
+import { planMonteCarlo } from '../../../src/engine/montecarlo/monteCarloPlan';
+import { finalizeMonteCarlo } from '../../../src/engine/montecarlo/monteCarloResult';
+import { runBatch } from '../../../src/engine/montecarlo/runBatch';
 import { lateralProfileAtDepth } from '../../../src/engine/montecarlo/planeProfile';
 import { collisionStoppingPowerMeVCm2PerG } from '../../../src/engine/materials/electronStopping';
 import { makeSpectrumSampler } from '../../../src/engine/montecarlo/spectrumSampler';
@@ -45,5 +52,23 @@ describe('Monte Carlo result extras', () => {
     expect(at(8)).toBeLessThan(0.2 * at(0));
     expect(at(-8)).toBeLessThan(0.2 * at(0));
     expect(Math.abs(at(2) - at(-2)) / at(0)).toBeLessThan(0.15);
+  });
+});
+
+describe('Monte Carlo points with an unknown 1σ', () => {
+  it('a partial run of one batch gives no point value (σ unknown), never a value with σ = 0', () => {
+    const c: McCaseInput = { ...CASE, points: [{ id: 'P', depthCm: 4 }] };
+    const plan = planMonteCarlo(c, { histories: 2000, seed: 5 });
+    const acc = accumulatorsOf(plan);
+    // Only the first batch of each scenario has arrived (as in the page's pool after one batch).
+    for (const { scenarioIndex, task } of batchTasksOf(plan).filter((t) => t.task.batchIndex === 0))
+      acc[scenarioIndex]!.add(runBatch(task));
+    const one = finalizeMonteCarlo(plan, acc, GRID).method.points[0]!;
+    expect(one.dosePerMuCGy).toBeNull();
+    expect(one.flags).toContain('MC 1σ unknown (too few batches)');
+    // With every batch the value and a positive σ are there.
+    const all = runMonteCarlo(c, { histories: 2000, seed: 5 }, GRID).method.points[0]!;
+    expect(all.dosePerMuCGy).toBeGreaterThan(0);
+    expect(all.sigmaDosePerMuCGy).toBeGreaterThan(0);
   });
 });
