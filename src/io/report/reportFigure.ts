@@ -1,11 +1,19 @@
 // The depth-dose figure of a printed record as plain data: each method's dose per MU against
-// depth, thinned to at most `maxPoints` per curve, with the axis domains and tick values. The
-// PDF and HTML renderers only map it to their own coordinates.
+// depth, thinned to at most `maxPoints` per curve, with the axis domains and tick values, each
+// method in the page's colour and dash pattern (so the curves differ in greyscale print too) and
+// the page's axis cut above a narrow spike. The PDF and HTML renderers only map it to their own
+// coordinates.
 import type { CalcReport } from '../../compute/calculateCase';
+import { spikeLimit } from '../../plots/curveLayout';
+import { seriesStyles } from '../../plots/palette';
 
 export interface ReportSeries {
   label: string;
-  /** [depth cm, dose per MU cGy] pairs; gaps (null doses) split the curve into runs. */
+  /** CSS colour ('currentColor' = the text colour: black on paper). */
+  color: string;
+  /** SVG dash array ('' = solid). */
+  dash: string;
+  /** [depth cm, dose per MU cGy] pairs; gaps (null doses, or above a cut axis) split the curve into runs. */
   runs: [number, number][][];
 }
 
@@ -18,6 +26,8 @@ export interface ReportFigure {
   xTicks: number[];
   yTicks: number[];
   series: ReportSeries[];
+  /** When a spike cut the axis: what lies above it (else null). */
+  clipNote: string | null;
 }
 
 /** Round tick values covering [lo, hi] with about `count` steps of 1, 2 or 5 × 10^k. */
@@ -35,15 +45,30 @@ export function niceTicks(lo: number, hi: number, count: number): number[] {
 export function depthDoseFigure(report: CalcReport, title: string, maxPoints = 160): ReportFigure {
   const n = report.depthCm.length;
   const stride = Math.max(1, Math.ceil(n / maxPoints));
+  const styles = seriesStyles(report.methods.map((m) => m.id));
+  // The same axis cut as the page's chart: a narrow spike must not flatten every other curve.
+  const limit = spikeLimit(
+    report.methods.map((m) => ({
+      id: m.id,
+      label: m.label,
+      color: '',
+      dash: '',
+      values: m.curve.dosePerMuCGy,
+    })),
+  );
+  const above: string[] = [];
   let yMax = 0;
   const series = report.methods.map((m): ReportSeries => {
     const runs: [number, number][][] = [];
     let run: [number, number][] = [];
+    let peak = 0;
     for (let i = 0; i < n; i++) {
       if (i % stride !== 0 && i !== n - 1) continue;
       const y = m.curve.dosePerMuCGy[i];
       const x = report.depthCm[i];
-      if (y === null || y === undefined || x === undefined || !Number.isFinite(y)) {
+      const shown = y !== null && y !== undefined && x !== undefined && Number.isFinite(y);
+      if (shown) peak = Math.max(peak, y);
+      if (!shown || (limit !== null && y > limit)) {
         if (run.length > 0) runs.push(run);
         run = [];
         continue;
@@ -52,10 +77,12 @@ export function depthDoseFigure(report: CalcReport, title: string, maxPoints = 1
       run.push([x, y]);
     }
     if (run.length > 0) runs.push(run);
-    return { label: m.label, runs };
+    if (limit !== null && peak > limit) above.push(`${m.label} (up to ${peak.toFixed(3)})`);
+    const style = styles.get(m.id) ?? { color: 'currentColor', dash: '' };
+    return { label: m.label, color: style.color, dash: style.dash, runs };
   });
   const xMax = report.depthCm[n - 1] ?? 1;
-  const yTop = yMax > 0 ? yMax * 1.05 : 1;
+  const yTop = limit ?? (yMax > 0 ? yMax * 1.05 : 1);
   return {
     title,
     xLabel: 'depth (cm)',
@@ -65,5 +92,9 @@ export function depthDoseFigure(report: CalcReport, title: string, maxPoints = 1
     xTicks: niceTicks(0, xMax, 8),
     yTicks: niceTicks(0, yTop, 5),
     series,
+    clipNote:
+      above.length > 0
+        ? `Axis cut at ${yTop.toFixed(2)} cGy/MU to keep the other curves readable; above it: ${above.join(', ')}.`
+        : null,
   };
 }

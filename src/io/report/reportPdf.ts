@@ -10,17 +10,19 @@ const PAGE = { width: 210, height: 297, margin: 14 };
 const CONTENT_WIDTH = PAGE.width - 2 * PAGE.margin;
 const BOTTOM = PAGE.height - PAGE.margin - 6;
 const PT_TO_MM = 0.3528;
-const SERIES_COLOURS: [number, number, number][] = [
-  [31, 119, 180],
-  [214, 39, 40],
-  [44, 160, 44],
-  [148, 103, 189],
-  [255, 127, 14],
-  [140, 86, 75],
-  [23, 190, 207],
-  [127, 127, 127],
-  [188, 189, 34],
-];
+/** '#RRGGBB' → [r, g, b]; anything else (e.g. 'currentColor', the text colour) → black. */
+function rgbOf(color: string): [number, number, number] {
+  const m = /^#([0-9a-f]{2})([0-9a-f]{2})([0-9a-f]{2})$/i.exec(color);
+  return m ? [parseInt(m[1]!, 16), parseInt(m[2]!, 16), parseInt(m[3]!, 16)] : [0, 0, 0];
+}
+
+/** An SVG dash array in px as a PDF dash pattern in mm (1 px ≈ 0.35 mm at the figure's scale). */
+function dashMm(dash: string): number[] {
+  return dash
+    .split(/\s+/)
+    .filter((t) => t !== '')
+    .map((t) => Number(t) * 0.35);
+}
 
 interface Cursor {
   y: number;
@@ -135,8 +137,10 @@ function writeFigure(doc: JsPdf, c: Cursor, fig: ReportFigure): void {
   doc.text(pdfText(fig.yLabel), PAGE.margin + 2, box.y + box.h / 2, { angle: 90, align: 'center' });
   doc.setLineWidth(0.35);
   fig.series.forEach((s, i) => {
-    const [r, g, b] = SERIES_COLOURS[i % SERIES_COLOURS.length] ?? [0, 0, 0];
+    const [r, g, b] = rgbOf(s.color);
     doc.setDrawColor(r, g, b);
+    // The page's dash pattern (px) scaled to the PDF's mm: the curves differ in greyscale too.
+    doc.setLineDashPattern(dashMm(s.dash), 0);
     for (const run of s.runs)
       for (let k = 1; k < run.length; k++) {
         const a = run[k - 1] as [number, number];
@@ -146,12 +150,14 @@ function writeFigure(doc: JsPdf, c: Cursor, fig: ReportFigure): void {
     const lx = box.x + (i % 2) * (box.w / 2);
     const ly = box.y + box.h + 11 + Math.floor(i / 2) * 4;
     doc.line(lx, ly - 0.8, lx + 6, ly - 0.8);
+    doc.setLineDashPattern([], 0);
     doc.setFontSize(6.5);
     doc.text(pdfText(s.label), lx + 7.5, ly);
   });
   doc.setDrawColor(0);
   doc.setLineWidth(0.2);
   c.y = box.y + box.h + 13 + legendRows * 4;
+  if (fig.clipNote) writeLines(doc, c, fig.clipNote, 6.5, 'normal');
 }
 
 function writeBlock(doc: JsPdf, c: Cursor, block: ReportBlock): void {

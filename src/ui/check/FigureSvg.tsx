@@ -2,24 +2,14 @@
 import { forwardRef } from 'react';
 import type { ReportFigure } from '../../io/report/reportFigure';
 
-const COLOURS = [
-  '#1f77b4',
-  '#d62728',
-  '#2ca02c',
-  '#9467bd',
-  '#ff7f0e',
-  '#8c564b',
-  '#17becf',
-  '#7f7f7f',
-  '#bcbd22',
-];
-
 export const FigureSvg = forwardRef<
   SVGSVGElement,
   { figure: ReportFigure; width?: number; height?: number }
 >(function FigureSvg({ figure, width = 640, height: plotHeight = 240 }, ref) {
   const legendRows = Math.ceil(figure.series.length / 2);
-  const m = { left: 52, right: 12, top: 22, bottom: 44 + legendRows * 14 };
+  // The axis-cut note takes two lines under the legend (it is part of the exported figure).
+  const noteLines = figure.clipNote ? figure.clipNote.split(/; (?=above it)/) : [];
+  const m = { left: 52, right: 12, top: 22, bottom: 44 + legendRows * 14 + noteLines.length * 12 };
   const height = plotHeight + m.bottom;
   const w = width - m.left - m.right;
   const h = height - m.top - m.bottom;
@@ -89,7 +79,8 @@ export const FigureSvg = forwardRef<
             key={`${i}-${k}`}
             points={run.map(([x, y]) => `${px(x).toFixed(1)},${py(y).toFixed(1)}`).join(' ')}
             fill="none"
-            stroke={COLOURS[i % COLOURS.length]}
+            stroke={s.color}
+            strokeDasharray={s.dash || undefined}
             strokeWidth={1.4}
           />
         )),
@@ -104,7 +95,8 @@ export const FigureSvg = forwardRef<
               x2={lx + 18}
               y1={ly - 4}
               y2={ly - 4}
-              stroke={COLOURS[i % COLOURS.length]}
+              stroke={s.color}
+              strokeDasharray={s.dash || undefined}
               strokeWidth={2}
             />
             <text x={lx + 22} y={ly} fontSize={10} fill="currentColor">
@@ -113,6 +105,18 @@ export const FigureSvg = forwardRef<
           </g>
         );
       })}
+      {noteLines.map((line, k) => (
+        <text
+          key={`n${k}`}
+          x={m.left}
+          y={m.top + h + 46 + legendRows * 14 + k * 12}
+          fontSize={9}
+          fill="currentColor"
+          data-testid="check-figure-note"
+        >
+          {k === 0 && noteLines.length > 1 ? `${line};` : line}
+        </text>
+      ))}
     </svg>
   );
 });
