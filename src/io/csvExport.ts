@@ -14,13 +14,20 @@ export function toCsv(fields: string[], rows: Cell[][]): string {
   return Papa.unparse({ fields, data: rows.map((r) => r.map((c) => (c === null ? '' : c))) });
 }
 
-/** One row per depth: geometric and radiological depth, then dose per MU and CF of each method. */
+/** One row per depth: geometric and radiological depth, then dose per MU and CF of each method (and 1σ where a method has one). */
 export function curvesCsv(report: CalcReport): string {
   const fields = ['depth_cm', 'radiological_depth_cm'];
-  for (const m of report.methods) fields.push(`${m.id}_dose_per_mu_cgy`, `${m.id}_cf`);
+  for (const m of report.methods) {
+    fields.push(`${m.id}_dose_per_mu_cgy`, `${m.id}_cf`);
+    // A statistical method (Monte Carlo) adds its 1σ.
+    if (m.curve.sigmaDosePerMuCGy) fields.push(`${m.id}_sigma_dose_per_mu_cgy`);
+  }
   const rows = report.depthCm.map((d, i) => {
     const row: Cell[] = [d, cell(report.radiologicalDepthCm[i])];
-    for (const m of report.methods) row.push(cell(m.curve.dosePerMuCGy[i]), cell(m.curve.cf[i]));
+    for (const m of report.methods) {
+      row.push(cell(m.curve.dosePerMuCGy[i]), cell(m.curve.cf[i]));
+      if (m.curve.sigmaDosePerMuCGy) row.push(cell(m.curve.sigmaDosePerMuCGy[i]));
+    }
     return row;
   });
   return toCsv(fields, rows);
@@ -41,6 +48,12 @@ export const POINT_CHECK_FIELDS = [
   'dose_diff_percent',
   'tolerance_percent',
   'verdict',
+  // 1σ of a statistical method (Monte Carlo); empty for the deterministic ones.
+  'sigma_dose_per_mu_cgy',
+  'sigma_check_mu',
+  'sigma_mu_diff_percent',
+  'sigma_dose_for_planning_mu_cgy',
+  'sigma_dose_diff_percent',
 ];
 
 /** One row per beam, point and method. */
@@ -64,6 +77,11 @@ export function pointCheckCsv(check: PlanCheck): string {
           cell(m.doseDiffPercent),
           p.tolerancePercent,
           m.verdict,
+          cell(m.sigma?.dosePerMuCGy),
+          cell(m.sigma?.mu),
+          cell(m.sigma?.muDiffPercent),
+          cell(m.sigma?.doseCGy),
+          cell(m.sigma?.doseDiffPercent),
         ]);
   return toCsv(POINT_CHECK_FIELDS, rows);
 }
@@ -76,6 +94,9 @@ export const TOTAL_CHECK_FIELDS = [
   'diff_percent',
   'tolerance_percent',
   'verdict',
+  // 1σ of a statistical method summed over beams (quadrature); empty otherwise.
+  'sigma_dose_cgy',
+  'sigma_diff_percent',
 ];
 
 /** One row per shared point and method: dose summed over beams. */
@@ -91,6 +112,8 @@ export function totalCheckCsv(check: PlanCheck): string {
         cell(m.diffPercent),
         t.tolerancePercent,
         m.verdict,
+        cell(m.sigma?.doseCGy),
+        cell(m.sigma?.diffPercent),
       ]);
   return toCsv(TOTAL_CHECK_FIELDS, rows);
 }

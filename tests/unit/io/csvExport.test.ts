@@ -57,6 +57,28 @@ describe('CSV exports', () => {
     });
   });
 
+  it('curvesCsv(report) adds a 1σ column for a method whose curve carries one', () => {
+    const report = calculateCase(parsed.value, { depthStepCm: 0.5 });
+    const sigma = report.depthCm.map((d) => 0.01 + d / 1000);
+    const m: MethodResult = {
+      id: 'stat',
+      label: 'stat',
+      variant: '',
+      methodClass: 'type C',
+      waterData: 'none',
+      curve: {
+        depthCm: report.depthCm,
+        dosePerMuCGy: report.depthCm.map((d) => 1 / (1 + d)),
+        cf: report.depthCm.map(() => 1),
+        sigmaDosePerMuCGy: sigma,
+      },
+      points: [],
+    };
+    const back = parse(curvesCsv({ ...report, methods: [m] }));
+    expect(back.meta.fields).toContain('stat_sigma_dose_per_mu_cgy');
+    back.data.forEach((row, i) => expect(row.stat_sigma_dose_per_mu_cgy).toBe(sigma[i]));
+  });
+
   it('pointCheckCsv(check) and totalCheckCsv(check) parse back to the check values', () => {
     const beam = (id: string, dpm: number) => ({
       id,
@@ -82,5 +104,36 @@ describe('CSV exports', () => {
     const totals = parse(totalCheckCsv(check));
     expect(totals.data[0]?.dose_cgy).toBe(check.totals[0]?.methods[0]?.doseCGy);
     expect(totals.data[0]?.planning_dose_cgy).toBe(200);
+    // A deterministic method leaves the σ columns empty.
+    expect(pa?.sigma_dose_per_mu_cgy).toBeNull();
+    expect(totals.data[0]?.sigma_dose_cgy).toBeNull();
+  });
+
+  it('the check CSVs carry the 1σ of a Monte Carlo value (per beam and, in quadrature, total)', () => {
+    const beam = (id: string, dpm: number, sigma: number) => ({
+      id,
+      label: id,
+      weight: 1,
+      layers: [{ topCm: 0, bottomCm: 20, relativeElectronDensity: 1 }],
+      points: [{ id: 'P', depthCm: 10, planningMu: 120, planningDoseCGy: 100 }],
+      methods: [
+        {
+          id: 'monte-carlo',
+          label: 'Monte Carlo',
+          points: [{ id: 'P', dosePerMuCGy: dpm, sigmaDosePerMuCGy: sigma }],
+        },
+      ],
+    });
+    const check = checkPlan([beam('AP', 0.81, 0.008), beam('PA', 0.79, 0.006)], {
+      tolerances: DEFAULT_TOLERANCES,
+    });
+    const rows = parse(pointCheckCsv(check));
+    const ap = check.beams[0]?.points[0]?.methods[0];
+    expect(rows.data[0]?.sigma_dose_per_mu_cgy).toBe(0.008);
+    expect(rows.data[0]?.sigma_dose_for_planning_mu_cgy).toBe(ap?.sigma?.doseCGy);
+    expect(rows.data[0]?.sigma_dose_diff_percent).toBe(ap?.sigma?.doseDiffPercent);
+    const totals = parse(totalCheckCsv(check));
+    // Dose for the planning MU: 120 MU × σ per MU; the two beams add in quadrature.
+    expect(totals.data[0]?.sigma_dose_cgy).toBeCloseTo(Math.hypot(120 * 0.008, 120 * 0.006), 9);
   });
 });
