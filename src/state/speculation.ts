@@ -71,11 +71,15 @@ export function makeRecentCache<V>(limit: number): RecentCache<V> {
   };
 }
 
-type Listener = (boundary: number) => void;
+/** Boundary index taken hold of, or null when it is let go. */
+type Listener = (boundary: number | null) => void;
 const listeners = new Set<Listener>();
 
-/** The user took hold of boundary `k` (pointer down or focus): prepare its nearby previews. */
-export function requestSpeculation(k: number): void {
+/**
+ * The user took hold of boundary `k` (pointer down or focus): prepare its nearby previews; null:
+ * the boundary was let go (pointer up, focus lost), stop.
+ */
+export function requestSpeculation(k: number | null): void {
   for (const l of listeners) l(k);
 }
 

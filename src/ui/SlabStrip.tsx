@@ -59,6 +59,7 @@ export function SlabStrip({ width }: { width: number }) {
       e.currentTarget.releasePointerCapture(e.pointerId);
     setFrozenDepthCm(0);
     endGesture();
+    requestSpeculation(null);
   };
   const onHandleKey = (k: number) => (e: KeyboardEvent<SVGGElement>) => {
     const step = e.shiftKey ? 1 : 0.1;
@@ -185,7 +186,10 @@ export function SlabStrip({ width }: { width: number }) {
           onKeyDown={onHandleKey(h.k)}
           onFocus={() => requestSpeculation(h.k)}
           onKeyUp={endGesture}
-          onBlur={endGesture}
+          onBlur={() => {
+            endGesture();
+            requestSpeculation(null);
+          }}
         >
           <line
             x1={h.x}

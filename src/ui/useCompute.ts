@@ -10,11 +10,10 @@ import { useEffect } from 'react';
 import { getComputeWorker, getPreviewWorker } from '../compute/computeClient';
 import { installDebugHooks } from '../compute/debugHooks';
 import { onRecalcRequest } from '../state/recalc';
-import { toCaseFile } from '../state/editorCase';
+import { boundariesCm, toCaseFile } from '../state/editorCase';
 import { makeLatestOnly } from '../state/latestOnly';
 import { makeShowGate } from '../state/showGate';
 import { setCalc, useAppStore, type AppState, type WaterSource } from '../state/store';
-import { boundariesCm } from '../state/editorCase';
 import {
   boundaryCandidates,
   makeRecentCache,
@@ -80,17 +79,27 @@ function previewKey(raw: LaminaCase, waterSource: WaterSource): string {
   return `${waterSource}|${JSON.stringify(raw)}`;
 }
 
+/** The worker's calculate options for an input. */
+function optionsOf({
+  waterSource,
+  depthStepCm,
+  methods,
+  etarKnotStepCm,
+}: Omit<CalcInput, 'seq' | 'raw'>) {
+  return {
+    waterSource: waterSource === 'modelled' ? ('modelled' as const) : ('case' as const),
+    depthStepCm,
+    ...(methods ? { methods: [...methods] } : {}),
+    ...(etarKnotStepCm !== undefined ? { typeA: { etarKnotStepCm } } : {}),
+  };
+}
+
 function calcIn(
   worker: () => ReturnType<typeof getComputeWorker>,
 ): (input: CalcInput) => Promise<Tagged> {
-  return ({ seq, raw, waterSource, depthStepCm, methods, etarKnotStepCm }) =>
+  return ({ seq, raw, ...rest }) =>
     worker()
-      .calculate(raw, {
-        waterSource: waterSource === 'modelled' ? 'modelled' : 'case',
-        depthStepCm,
-        ...(methods ? { methods: [...methods] } : {}),
-        ...(etarKnotStepCm !== undefined ? { typeA: { etarKnotStepCm } } : {}),
-      })
+      .calculate(raw, optionsOf(rest))
       .then(
         (answer): Tagged => ({ seq, ok: true, answer }),
         (error: unknown): Tagged => ({ seq, ok: false, error }),
@@ -187,8 +196,13 @@ export function useCompute(): void {
     // older sweep.
     let sweep = 0;
     let sweepAround: { k: number; depthCm: number } | null = null;
-    const speculate = async (k: number) => {
+    const speculate = async (k: number | null) => {
       const id = ++sweep;
+      if (k === null) {
+        // The boundary was let go: stop preparing, and do not follow later edits.
+        sweepAround = null;
+        return;
+      }
       // Let the frame of the input that asked for this paint first.
       await new Promise((resolve) => setTimeout(resolve, 0));
       const s = useAppStore.getState();
@@ -202,12 +216,10 @@ export function useCompute(): void {
         const key = previewKey(raw, s.waterSource);
         if (cache.has(key)) continue;
         try {
-          const answer = await getPreviewWorker().calculate(raw, {
-            waterSource: s.waterSource === 'modelled' ? 'modelled' : 'case',
-            depthStepCm: PREVIEW_OPTIONS.depthStepCm,
-            methods: [...PREVIEW_OPTIONS.methods],
-            typeA: { etarKnotStepCm: PREVIEW_OPTIONS.etarKnotStepCm },
-          });
+          const answer = await getPreviewWorker().calculate(
+            raw,
+            optionsOf({ waterSource: s.waterSource, ...PREVIEW_OPTIONS }),
+          );
           if (answer.ok) cache.set(key, answer.report);
         } catch {
           // The worker was lost: the live path reports it; preparing stops here.
@@ -215,9 +227,16 @@ export function useCompute(): void {
         }
       }
     };
-    /** Re-centre the sweep when the held boundary has moved half the prepared radius. */
+    /**
+     * Re-centre the sweep when the held boundary has moved half the prepared radius; start one
+     * when a boundary is moved with no sweep going (e.g. nudged by key after a pointer drag).
+     */
     const followSweep = (s: AppState) => {
-      if (!sweepAround) return;
+      const held = /^(?:drag|nudge)-(\d+)$/.exec(s.history.openKey ?? '');
+      if (!sweepAround) {
+        if (held) void speculate(Number(held[1]));
+        return;
+      }
       const at = boundariesCm(s.history.present)[sweepAround.k];
       if (at !== undefined && Math.abs(at - sweepAround.depthCm) >= SPECULATION_RADIUS_CM / 2)
         void speculate(sweepAround.k);

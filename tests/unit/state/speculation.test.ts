@@ -60,12 +60,13 @@ describe('makeRecentCache', () => {
 });
 
 describe('speculation requests', () => {
-  it('reach every listener until it stops listening', () => {
-    const got: number[] = [];
+  it('reach every listener until it stops listening, a let-go as null', () => {
+    const got: (number | null)[] = [];
     const stop = onSpeculationRequest((k) => got.push(k));
     requestSpeculation(2);
+    requestSpeculation(null);
     stop();
     requestSpeculation(3);
-    expect(got).toEqual([2]);
+    expect(got).toEqual([2, null]);
   });
 });
