@@ -2,7 +2,9 @@
 // carries "?debug=1": `window.__laminaDebug.killComputeWorker()` stops the compute worker now,
 // `killComputeWorkerDuringNextCalculation()` stops it right after the next request is sent (a
 // crash mid-run), `computeWorkerStarts()` counts the workers started, `killMonteCarloWorkers()`
-// stops the workers of a running Monte Carlo run. Nothing here runs otherwise.
+// stops the workers of a running Monte Carlo run, `speculation()` counts the previews prepared
+// for a held boundary and the edits drawn from them. Nothing here runs otherwise.
+import { speculationStats } from '../state/speculation';
 import { computeWorker } from './computeClient';
 
 export interface LaminaDebug {
@@ -11,6 +13,8 @@ export interface LaminaDebug {
   computeWorkerStarts(): number;
   /** Stops every Monte Carlo worker of the running run as if it had crashed; returns how many. */
   killMonteCarloWorkers(): Promise<number>;
+  /** Previews prepared for a held boundary, and edits drawn from a ready preview. */
+  speculation(): { prepared: number; hits: number };
 }
 
 export function debugFlagIsSet(search: string): boolean {
@@ -28,6 +32,7 @@ export function installDebugHooks(): boolean {
         'The compute worker stopped during the calculation (debug action).',
       ),
     computeWorkerStarts: () => computeWorker.starts(),
+    speculation: () => ({ ...speculationStats }),
     // Imported on use, so the Monte Carlo pool stays out of the page's first bundle.
     killMonteCarloWorkers: async () =>
       (await import('./mcPool')).terminateMonteCarloWorkers(

@@ -72,6 +72,14 @@ export function makeRecentCache<V>(limit: number): RecentCache<V> {
 }
 
 /** Boundary index taken hold of, or null when it is let go. */
+/** Counters for tests and support (read through the page's debug hooks). */
+export const speculationStats = {
+  /** Previews prepared ahead of an edit. */
+  prepared: 0,
+  /** Edits drawn from a prepared (or earlier) preview without asking a worker. */
+  hits: 0,
+};
+
 type Listener = (boundary: number | null) => void;
 const listeners = new Set<Listener>();
 

@@ -19,6 +19,7 @@ import {
   makeRecentCache,
   onSpeculationRequest,
   SPECULATION_RADIUS_CM,
+  speculationStats,
 } from '../state/speculation';
 import type { LaminaCase } from '../io/caseSchema';
 import type { ComputeApi } from '../compute/computeApi';
@@ -220,7 +221,10 @@ export function useCompute(): void {
             raw,
             optionsOf({ waterSource: s.waterSource, ...PREVIEW_OPTIONS }),
           );
-          if (answer.ok) cache.set(key, answer.report);
+          if (answer.ok) {
+            cache.set(key, answer.report);
+            speculationStats.prepared += 1;
+          }
         } catch {
           // The worker was lost: the live path reports it; preparing stops here.
           return;
@@ -248,8 +252,10 @@ export function useCompute(): void {
       if (wants.preview) {
         const key = previewKey(base.raw, base.waterSource);
         const ready = lastFull ? cache.get(key) : undefined;
-        if (ready && lastFull && gate.preview(seq)) showPreview(ready, lastFull);
-        else {
+        if (ready && lastFull && gate.preview(seq)) {
+          speculationStats.hits += 1;
+          showPreview(ready, lastFull);
+        } else {
           keys.set(seq, key);
           for (const old of keys.keys()) if (old < seq - 8) keys.delete(old);
           preview.request({ ...base, ...PREVIEW_OPTIONS });

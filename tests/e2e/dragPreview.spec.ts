@@ -43,3 +43,34 @@ test('while a boundary is held the slower curves show as updating, and the relea
   await expect(page.getByTestId('calc-status')).toContainText('calculated in');
   await expect(page.getByTestId('dose-superposition-P1')).toHaveText(/^\d+\.\d{3}/);
 });
+
+type Debug = { __laminaDebug?: { speculation(): { prepared: number; hits: number } } };
+const speculation = (page: import('@playwright/test').Page) =>
+  page.evaluate(() => (window as unknown as Debug).__laminaDebug!.speculation());
+
+test('a boundary taken hold of with the keyboard has its nearby previews ready: a nudge is drawn from them, then the full curves follow', async ({
+  page,
+}) => {
+  await page.goto('/?debug=1');
+  await page.getByTestId('preset').selectOption('chest');
+  const chart = page.getByTestId('dose-chart');
+  await expect(chart).toHaveAttribute('data-samples', '401');
+  await expect(page.getByTestId('calc-status')).toContainText('calculated in');
+  const rtmr = chart.locator('path.curve[data-method="rtmr"]');
+  const before = await rtmr.getAttribute('d');
+
+  // Focus the lung's lower boundary (11 cm): the previews within 2 cm are prepared in a worker.
+  await page.getByTestId('boundary-2').focus();
+  await expect.poll(async () => (await speculation(page)).prepared).toBeGreaterThanOrEqual(10);
+  const hitsBefore = (await speculation(page)).hits;
+
+  await page.keyboard.press('ArrowRight');
+  await expect(page.getByTestId('boundary-2')).toHaveAttribute('aria-valuenow', '11.1');
+  // Drawn from the prepared preview (no worker round trip) with the edit itself: the new curve.
+  expect((await speculation(page)).hits).toBe(hitsBefore + 1);
+  await expect(rtmr).not.toHaveAttribute('d', before ?? '');
+  // Once the keys settle the full calculation replaces the preview.
+  await expect(chart).toHaveAttribute('data-samples', '401');
+  await expect(page.getByTestId('calc-status')).toContainText('calculated in');
+  await expect(page.getByTestId('layer-2-thickness')).toHaveValue('8.1');
+});
