@@ -308,6 +308,20 @@ async function hoverRows(page: Page, moves: number): Promise<BenchRow[]> {
   return latencyRows(page, HOVER_NAME, start + warmUp, moves, note);
 }
 
+/** The page's main-thread JS heap in use after a garbage collection (MB), via the DevTools protocol. */
+async function pageHeapMb(page: Page): Promise<number> {
+  const cdp = await page.context().newCDPSession(page);
+  try {
+    await cdp.send('HeapProfiler.collectGarbage');
+    await cdp.send('Performance.enable');
+    const { metrics } = await cdp.send('Performance.getMetrics');
+    const used = metrics.find((m) => m.name === 'JSHeapUsedSize')?.value ?? NaN;
+    return used / 1e6;
+  } finally {
+    await cdp.detach();
+  }
+}
+
 export async function editToPaintRows(
   browser: Browser,
   url: string,
@@ -329,12 +343,29 @@ export async function editToPaintRows(
         ),
       ];
     await page.evaluate(installLatencyProbe, CHART);
+    const heapAfterLoad = await pageHeapMb(page);
     const rows = await keyboardRows(page, nudges);
     // Let the last full calculation land before the drag starts.
     await page.waitForTimeout(500);
     rows.push(...(await dragRows(page, nudges)));
     await page.waitForTimeout(500);
     rows.push(...(await hoverRows(page, nudges)));
+    const heapAfterEdits = await pageHeapMb(page);
+    rows.push(
+      {
+        group: EDIT_GROUP,
+        name: 'page JS heap after load (main thread, after GC)',
+        unit: 'MB',
+        samples: [heapAfterLoad],
+        note: 'workers have their own heaps, not counted',
+      },
+      {
+        group: EDIT_GROUP,
+        name: 'page JS heap after the edits above (previews cached, after GC)',
+        unit: 'MB',
+        samples: [heapAfterEdits],
+      },
+    );
     return rows;
   } catch (e) {
     return [errorRow(EDIT_GROUP, EDIT_NAME, e)];
