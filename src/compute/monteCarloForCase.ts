@@ -1,6 +1,7 @@
 // The Monte Carlo block of a case calculation (single-threaded; the page uses the worker pool in
 // mcPool.ts instead). Runs only when a number of histories is given. With water data, dose per MU
 // uses its reference dose rate and its collimator-scatter factor S_c (the MC models the phantom).
+import { modelledWaterData } from '../engine/beam/modelledBeam';
 import { equivalentSquareCm } from '../engine/beam/geometry';
 import type { WaterData } from '../engine/beam/waterData';
 import type { MethodResult } from '../engine/methodResult';
@@ -36,6 +37,9 @@ export function monteCarloForCase(
     {
       histories: mc.histories,
       seed: mc.seed,
+      // The calibration maximum is fitted around the modelled beam's d_max (same kernels and
+      // spectrum as the Monte Carlo), whatever water data the other methods use.
+      referenceDMaxCm: modelledWaterData(c.beam.energy).dMaxCm,
       ...(waterData
         ? {
             referenceDosePerMuCGy: waterData.referenceDosePerMuCGy,

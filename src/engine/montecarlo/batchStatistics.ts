@@ -47,6 +47,22 @@ export class BatchAccumulator {
     return statistics(this.done().map((t) => ({ values: t.caxMeV, histories: t.histories })));
   }
 
+  /**
+   * Mean and batch standard error of a linear combination Σ wᵢ·(deposit per history in bin i) of
+   * the central-axis bins, taken batch by batch (so correlations between bins are counted).
+   */
+  caxLinearStatistics(weights: Float64Array): { mean: number; sigma: number } {
+    const s = statistics(
+      this.done().map((t) => {
+        let sum = 0;
+        for (let i = 0; i < weights.length; i++)
+          sum += (weights[i] as number) * (t.caxMeV[i] as number);
+        return { values: Float64Array.of(sum), histories: t.histories };
+      }),
+    );
+    return { mean: s.mean[0] as number, sigma: s.sigma[0] as number };
+  }
+
   /** Mean per history of the lateral histogram (no uncertainty). */
   lateralMean(): Float64Array {
     const done = this.done();

@@ -27,6 +27,12 @@ export interface McOptions {
   doseToWater?: boolean;
   /** cGy per MU at d_max for 10 × 10 cm², SSD 100 (default 1). */
   referenceDosePerMuCGy?: number;
+  /**
+   * Nominal d_max of the beam's water data for 10 × 10 cm², SSD 100 (cm): the calibration run's
+   * maximum is then fitted over depth bins fixed around it (no selection bias). Absent: the run's
+   * own maximum is used.
+   */
+  referenceDMaxCm?: number;
   /** Collimator-scatter factor S_c of the field (the MC models the phantom only; default 1). */
   collimatorScatterFactor?: number;
   transport?: TransportOptions;

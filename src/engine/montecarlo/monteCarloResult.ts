@@ -12,6 +12,7 @@ import {
   GRAY_PER_MEV_PER_G,
   type McDepthDose,
 } from './depthDose';
+import { calibrationMaximum } from './calibrationMaximum';
 import { sampleBinsAtDepths } from './gridSampling';
 import type { McPlan } from './monteCarloPlan';
 import { scoringGrid, type ScoringGrid } from './scenario';
@@ -71,7 +72,7 @@ export function finalizeMonteCarlo(
   const caseDd = dd(plan.roles.case);
   const waterDd = dd(plan.roles.water);
   const refDd = dd(plan.roles.reference);
-  const max = depthOfMaximum(refDd);
+  const max = calibrationOf(refDd, accumulators[plan.roles.reference]!, opts.referenceDMaxCm);
   const refRate = opts.referenceDosePerMuCGy ?? 1;
   const sc = opts.collimatorScatterFactor ?? 1;
   const muPerFluence = (refRate * sc) / max.value;
@@ -196,4 +197,29 @@ function planeOf(
     rows.push(row);
   }
   return { xCm: xs, depthCm: depths, dosePerMuCGy: rows };
+}
+
+/**
+ * The calibration run's maximum: with the water data's nominal d_max, a fit over bins fixed in
+ * advance (no selection bias) whose σ is taken batch by batch; without it (no water data), the
+ * run's own fitted maximum.
+ */
+function calibrationOf(
+  refDd: McDepthDose,
+  acc: BatchAccumulator,
+  nominalDMaxCm: number | undefined,
+): { depthCm: number; value: number; sigma: number } {
+  if (nominalDMaxCm === undefined) return depthOfMaximum(refDd);
+  const fit = calibrationMaximum(refDd, nominalDMaxCm);
+  // Dose per fluence is the deposit per history times a per-bin factor: carry the weights over.
+  const mean = acc.caxStatistics().mean;
+  const onDeposits = fit.weights.map((w, i) => {
+    const m = mean[i] as number;
+    return w === 0 || !(m > 0) ? 0 : (w * (refDd.dosePerFluenceGyCm2[i] as number)) / m;
+  });
+  return {
+    depthCm: fit.depthCm,
+    value: fit.value,
+    sigma: acc.caxLinearStatistics(onDeposits).sigma,
+  };
 }

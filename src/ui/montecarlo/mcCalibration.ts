@@ -10,6 +10,11 @@ import type { LaminaCase } from '../../io/caseSchema';
 export interface McCalibration {
   referenceDosePerMuCGy: number;
   collimatorScatterFactor: number;
+  /**
+   * Nominal d_max (cm) around which the calibration run's maximum is fitted: the modelled beam's,
+   * which comes from the same kernels and spectrum as the Monte Carlo.
+   */
+  referenceDMaxCm: number;
   /** Where the two numbers come from, for the panel. */
   source: string;
 }
@@ -21,6 +26,7 @@ export function monteCarloCalibration(c: LaminaCase, waterSource?: string): McCa
   return {
     referenceDosePerMuCGy: data.referenceDosePerMuCGy,
     collimatorScatterFactor: data.sc(equivalentSquareCm(c.beam.fieldXCm, c.beam.fieldYCm)),
+    referenceDMaxCm: modelled.dMaxCm,
     source: data.source,
   };
 }

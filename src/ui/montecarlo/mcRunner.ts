@@ -79,6 +79,7 @@ export function startRun(req: StartRequest): void {
         doseToWater: req.doseToWater,
         referenceDosePerMuCGy: calibration.referenceDosePerMuCGy,
         collimatorScatterFactor: calibration.collimatorScatterFactor,
+        referenceDMaxCm: calibration.referenceDMaxCm,
       },
       (p) => {
         if (id !== runCounter) return;
