@@ -15,6 +15,8 @@ export interface ReportSeries {
   dash: string;
   /** [depth cm, dose per MU cGy] pairs; gaps (null doses, or above a cut axis) split the curve into runs. */
   runs: [number, number][][];
+  /** A statistical method's ±1σ band as runs of [depth cm, dose − σ, dose + σ] (else absent). */
+  band?: [number, number, number][][];
 }
 
 export interface ReportFigure {
@@ -59,8 +61,11 @@ export function depthDoseFigure(report: CalcReport, title: string, maxPoints = 1
   const above: string[] = [];
   let yMax = 0;
   const series = report.methods.map((m): ReportSeries => {
+    const sigma = m.curve.sigmaDosePerMuCGy;
     const runs: [number, number][][] = [];
+    const band: [number, number, number][][] = [];
     let run: [number, number][] = [];
+    let bandRun: [number, number, number][] = [];
     let peak = 0;
     for (let i = 0; i < n; i++) {
       if (i % stride !== 0 && i !== n - 1) continue;
@@ -70,16 +75,31 @@ export function depthDoseFigure(report: CalcReport, title: string, maxPoints = 1
       if (shown) peak = Math.max(peak, y);
       if (!shown || (limit !== null && y > limit)) {
         if (run.length > 0) runs.push(run);
+        if (bandRun.length > 0) band.push(bandRun);
         run = [];
+        bandRun = [];
         continue;
       }
       yMax = Math.max(yMax, y);
       run.push([x, y]);
+      const s = sigma?.[i];
+      if (s !== undefined && Number.isFinite(s) && s > 0) {
+        const hi = limit !== null ? Math.min(y + s, limit) : y + s;
+        bandRun.push([x, Math.max(0, y - s), hi]);
+        yMax = Math.max(yMax, hi);
+      }
     }
     if (run.length > 0) runs.push(run);
+    if (bandRun.length > 0) band.push(bandRun);
     if (limit !== null && peak > limit) above.push(`${m.label} (up to ${peak.toFixed(3)})`);
     const style = styles.get(m.id) ?? { color: 'currentColor', dash: '' };
-    return { label: m.label, color: style.color, dash: style.dash, runs };
+    return {
+      label: sigma ? `${m.label} (band: ±1σ)` : m.label,
+      color: style.color,
+      dash: style.dash,
+      runs,
+      ...(band.length > 0 ? { band } : {}),
+    };
   });
   const xMax = report.depthCm[n - 1] ?? 1;
   const yTop = limit ?? (yMax > 0 ? yMax * 1.05 : 1);

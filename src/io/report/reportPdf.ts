@@ -136,6 +136,20 @@ function writeFigure(doc: JsPdf, c: Cursor, fig: ReportFigure): void {
   doc.text(pdfText(fig.xLabel), box.x + box.w / 2, box.y + box.h + 7, { align: 'center' });
   doc.text(pdfText(fig.yLabel), PAGE.margin + 2, box.y + box.h / 2, { angle: 90, align: 'center' });
   doc.setLineWidth(0.35);
+  // ±1σ bands first, under every curve: the curve's colour mixed 80 % with white (no transparency).
+  for (const s of fig.series)
+    for (const run of s.band ?? []) {
+      if (run.length < 2) continue;
+      const [r, g, b] = rgbOf(s.color).map((v) => Math.round(v + 0.8 * (255 - v)));
+      doc.setFillColor(r!, g!, b!);
+      const pts: [number, number][] = [
+        ...run.map(([x, , hi]): [number, number] => [px(x), py(hi)]),
+        ...[...run].reverse().map(([x, lo]): [number, number] => [px(x), py(lo)]),
+      ];
+      const [x0p, y0p] = pts[0]!;
+      const steps = pts.slice(1).map(([x, y], k) => [x - pts[k]![0], y - pts[k]![1]]);
+      doc.lines(steps, x0p, y0p, [1, 1], 'F', true);
+    }
   fig.series.forEach((s, i) => {
     const [r, g, b] = rgbOf(s.color);
     doc.setDrawColor(r, g, b);

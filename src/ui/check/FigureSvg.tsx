@@ -74,6 +74,22 @@ export const FigureSvg = forwardRef<
         {figure.yLabel}
       </text>
       {figure.series.map((s, i) =>
+        (s.band ?? []).map((run, k) => (
+          <path
+            key={`b${i}-${k}`}
+            d={`M${run.map(([x, , hi]) => `${px(x).toFixed(1)},${py(hi).toFixed(1)}`).join('L')}L${[
+              ...run,
+            ]
+              .reverse()
+              .map(([x, lo]) => `${px(x).toFixed(1)},${py(lo).toFixed(1)}`)
+              .join('L')}Z`}
+            fill={s.color}
+            fillOpacity={0.18}
+            stroke="none"
+          />
+        )),
+      )}
+      {figure.series.map((s, i) =>
         s.runs.map((run, k) => (
           <polyline
             key={`${i}-${k}`}

@@ -49,3 +49,29 @@ describe('depthDoseFigure', () => {
     expect(fig.yDomain[1]).toBeCloseTo(max * 1.05, 9);
   });
 });
+
+describe('depthDoseFigure, statistical methods', () => {
+  it('draws a ±1σ band around a method whose curve carries σ, and names it in the legend', () => {
+    const water = report.methods.find((m) => m.id === 'water')!;
+    const sigma = water.curve.dosePerMuCGy.map((v) => (v === null ? 0 : 0.02 * v));
+    const mc = {
+      ...water,
+      id: 'monte-carlo',
+      label: 'Monte Carlo',
+      curve: { ...water.curve, sigmaDosePerMuCGy: sigma },
+    };
+    const fig = depthDoseFigure({ ...report, methods: [water, mc] }, 'Depth dose');
+    const s = fig.series[1]!;
+    expect(s.label).toBe('Monte Carlo (band: ±1σ)');
+    expect(fig.series[0]!.band).toBeUndefined();
+    const curve = new Map(s.runs.flat().map(([x, y]) => [x, y]));
+    const band = s.band!.flat();
+    expect(band.length).toBeGreaterThan(10);
+    for (const [x, lo, hi] of band) {
+      const y = curve.get(x)!;
+      // ±2 % of the dose (the synthetic σ), clipped at 0 below.
+      expect(lo).toBeCloseTo(Math.max(0, 0.98 * y), 12);
+      expect(hi).toBeCloseTo(1.02 * y, 12);
+    }
+  });
+});
