@@ -105,6 +105,45 @@ describe('printed record', () => {
     expect(pdf).toContain('Water chain at P1');
   });
 
+  it('a method with a ±1σ curve gets its band drawn (a filled path) and named in the PDF figure', async () => {
+    if (!plan.ok) return;
+    const base = reportWithSynthetic();
+    const withSigma = (k: number): PlanReport => ({
+      ...base,
+      beams: base.beams.map((b) => ({
+        ...b,
+        report: {
+          ...b.report,
+          methods: b.report.methods.map((m) => ({
+            ...m,
+            curve: {
+              ...m.curve,
+              sigmaDosePerMuCGy: m.curve.dosePerMuCGy.map((v) => k * (v ?? 0)),
+            },
+          })),
+        },
+      })),
+    });
+    const pdfOf = async (result: PlanReport) =>
+      latin1(
+        await reportPdfBytes(
+          buildReportModel({
+            plan: plan.ok ? plan.value : (undefined as never),
+            result,
+            date: new Date('2026-12-01T23:10:00Z'),
+            appVersion: APP_VERSION,
+            waterChains: {},
+          }),
+        ),
+      );
+    const fills = (pdf: string) => pdf.match(/(?:^|\s)f(?=\s)/g)?.length ?? 0;
+    const banded = await pdfOf(withSigma(0.03));
+    const flat = await pdfOf(withSigma(0)); // σ = 0: no band
+    expect(banded).toContain(shown('Synthetic exponential (band: ±1σ)'));
+    // One filled band per beam figure (two beams) more than without σ.
+    expect(fills(banded) - fills(flat)).toBe(2);
+  });
+
   it('buildReportModel(...) carries warnings, the figure and the verdict', () => {
     if (!plan.ok) return;
     const result = reportWithSynthetic();
