@@ -146,7 +146,20 @@ test('a two-beam plan opened from a file shows the total, and travels through a 
   await expect(page.getByTestId('check-beams')).toContainText('PA');
   const doc = JSON.parse(readFileSync('public/cases/opposed-pair-chest-6mv.plan.json', 'utf8')) as {
     name: string;
+    beams: { id: string; case: { name: string } }[];
   };
+  const pa = doc.beams.find((b) => b.id === 'PA')!;
   await expect(page.getByTestId('check-record')).toHaveCount(1);
   await expect(page.locator('body')).toContainText(doc.name.slice(0, 20));
+
+  // The PA beam is edited with the full editor: it becomes beam 1, the editor's case takes its row,
+  // and the total is formed again over both beams.
+  const total = await page.getByTestId('check-total-table').innerText();
+  await page.getByTestId('check-edit-beam-PA').click();
+  await expect(page.getByLabel('Beam 1 id')).toHaveValue('PA');
+  await expect(page.getByTestId('check-beams').locator('tbody tr').nth(1)).toContainText('AP');
+  await expect(page.locator('#case-name')).toHaveValue(pa.case.name);
+  await expect(page.getByTestId('check-total-table')).toBeVisible();
+  // Same two beams, same weights: the sum at the shared point is unchanged.
+  await expect.poll(() => page.getByTestId('check-total-table').innerText()).toBe(total);
 });

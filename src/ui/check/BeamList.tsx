@@ -1,7 +1,13 @@
 // The beams of the check: beam 1 is the case in the editor; more beams come from case files or a
 // plan file (each with its own slab path, set-up, field and the point depths along it).
 import { addBeamsFromFile } from './planActions';
-import { patchExtraBeam, patchFirstBeam, removeExtraBeam, useCheckStore } from './checkStore';
+import {
+  patchExtraBeam,
+  patchFirstBeam,
+  removeExtraBeam,
+  swapIntoEditor,
+  useCheckStore,
+} from './checkStore';
 import { NumInput } from './NumInput';
 import { RetryButton } from '../RetryButton';
 import { WORKER_PROBLEM_PATH } from './useCheck';
@@ -74,6 +80,14 @@ export function BeamList() {
                 {b.problems.some((p) => p.path === WORKER_PROBLEM_PATH) ? <RetryButton /> : null}
               </td>
               <td>
+                <button
+                  type="button"
+                  onClick={() => swapIntoEditor(b.key)}
+                  title="Open this beam in the editor as beam 1; the editor's case takes this row"
+                  data-testid={`check-edit-beam-${b.id}`}
+                >
+                  Edit in the editor
+                </button>{' '}
                 <button type="button" onClick={() => removeExtraBeam(b.key)}>
                   Remove
                 </button>

@@ -6,6 +6,8 @@ import type { CalcReport } from '../../compute/calculateCase';
 import { DEFAULT_TOLERANCES, type Tolerances } from '../../engine/check/tolerance';
 import type { CaseProblem } from '../../io/caseFile';
 import type { LaminaCase } from '../../io/caseSchema';
+import { toCaseFile } from '../../state/editorCase';
+import { replaceCase, useAppStore } from '../../state/store';
 
 export interface ExtraBeam {
   key: string;
@@ -75,4 +77,30 @@ export function removeExtraBeam(key: string): void {
 
 export function clearExtraBeams(): void {
   set({ extraBeams: [] });
+}
+
+/**
+ * Edit an extra beam with the full editor: it becomes beam 1 (its case opens in the editor, its
+ * id, label and weight move to the first row) and the editor's case takes its place in the list
+ * with the first row's id, label and weight. The opened case is one undo step in the editor; undo
+ * brings the editor's case back but leaves the list as it is.
+ */
+export function swapIntoEditor(key: string): void {
+  const s = get();
+  const k = s.extraBeams.findIndex((b) => b.key === key);
+  const beam = s.extraBeams[k];
+  if (!beam) return;
+  const editorCase = toCaseFile(useAppStore.getState().history.present);
+  const extraBeams = [...s.extraBeams];
+  extraBeams[k] = {
+    key: newBeamKey(),
+    id: s.firstBeam.id,
+    label: s.firstBeam.label,
+    weight: s.firstBeam.weight,
+    case: editorCase,
+    report: null,
+    problems: [],
+  };
+  set({ extraBeams, firstBeam: { id: beam.id, label: beam.label, weight: beam.weight } });
+  replaceCase(beam.case);
 }
