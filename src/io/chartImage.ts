@@ -27,7 +27,8 @@ export function svgTextOf(svg: SVGSVGElement): string {
     target.setAttribute('style', `${inline};${target.getAttribute('style') ?? ''}`);
   });
   const { width, height } = svg.getBoundingClientRect();
-  clone.setAttribute('xmlns', 'http://www.w3.org/2000/svg');
+  // No namespace attribute is set by hand: the clone is an SVG-namespace element, so
+  // XMLSerializer writes its namespace declaration itself.
   if (!clone.getAttribute('width')) clone.setAttribute('width', String(Math.round(width)));
   if (!clone.getAttribute('height')) clone.setAttribute('height', String(Math.round(height)));
   return `<?xml version="1.0" encoding="UTF-8"?>\n${new XMLSerializer().serializeToString(clone)}\n`;

@@ -87,6 +87,8 @@ test('entering the planning dose and MU gives a verdict; print view and PDF reco
   ]);
   const svgText = readFileSync(await svg.path(), 'utf8');
   expect(svgText).toMatch(/^<\?xml/);
+  // A standalone SVG file: the root declares the SVG namespace (written by the serialiser).
+  expect(svgText).toMatch(/<svg[^>]* xmlns="[^"]*\/2000\/svg"/);
   expect(svgText).toContain('<polyline');
   const [png] = await Promise.all([
     page.waitForEvent('download'),
