@@ -1,5 +1,6 @@
 // The shape every dose method returns, so the CLI, the worker API and the page treat all
 // methods alike. Curves are sampled on the same depth grid for every method of a case.
+import type { MethodId } from './methodRegistry';
 
 export type MethodClass = 'none' | 'type A' | 'type B' | 'type C';
 
@@ -26,8 +27,8 @@ export interface MethodPoint {
 }
 
 export interface MethodResult {
-  /** Stable id: water, rtmr, epl-pdd, batho, batho-modified, etar, pencil-beam, superposition, monte-carlo. */
-  id: string;
+  /** Stable id from the method registry (src/engine/methodRegistry.ts). */
+  id: MethodId;
   label: string;
   /** The variant used, printed with every result (e.g. "TMR, no shift, μ₀ ≡ water"). */
   variant: string;

@@ -1,6 +1,8 @@
 // Method styles: Okabe–Ito colours (distinguishable with the common colour-vision deficiencies)
 // paired with a dash pattern, so curves also differ in greyscale print. Known methods keep a
-// fixed style; others take the next free one in order of appearance.
+// fixed style (by their place in the method registry); others take the next free one in order of
+// appearance.
+import { METHOD_IDS } from '../engine/methodRegistry';
 
 export const OKABE_ITO = [
   '#000000', // black (drawn with the text colour in dark theme)
@@ -19,18 +21,6 @@ export interface SeriesStyle {
   color: string;
   dash: string;
 }
-
-const KNOWN_ORDER = [
-  'water',
-  'rtmr',
-  'epl-pdd',
-  'batho',
-  'batho-modified',
-  'etar',
-  'pencil-beam',
-  'superposition',
-  'monte-carlo',
-];
 
 // Yellow is hard to see on white: used last, and only with a dash pattern.
 const STYLES: SeriesStyle[] = [
@@ -51,7 +41,7 @@ export function seriesStyles(ids: readonly string[]): Map<string, SeriesStyle> {
   const out = new Map<string, SeriesStyle>();
   const used = new Set<number>();
   for (const id of ids) {
-    const k = KNOWN_ORDER.indexOf(id);
+    const k = (METHOD_IDS as readonly string[]).indexOf(id);
     if (k >= 0) {
       out.set(id, STYLES[k] as SeriesStyle);
       used.add(k);

@@ -1,5 +1,6 @@
 // What every type-A correction method takes and returns. A method is a pure function of the
 // phantom, the point's geometric depth, the field side at that depth and the water data.
+import type { MethodId } from '../methodRegistry';
 import type { ExtrapolationFlag, LookupRecorder, WaterData } from '../beam/waterData';
 import type { SlabLayer, SlabPhantom } from '../phantom/slabPhantom';
 
@@ -37,8 +38,8 @@ export interface CorrectionResult {
 }
 
 export interface TypeAMethod {
-  /** Stable id: water, rtmr, epl-pdd, batho, batho-modified, etar. */
-  id: string;
+  /** Stable id from the method registry: water, rtmr, epl-pdd, batho, batho-modified, etar. */
+  id: MethodId;
   label: string;
   variant(options: CorrectionOptions): string;
   /** Whether the method reads PSF with these options (its variant then names a PSF approximation). */

@@ -2,28 +2,10 @@
 // A warning covers a depth range on the central axis; it says which methods it concerns, which
 // it concerns only approximately and which it leaves unaffected, and the numbers that raised it.
 
-/** Method ids as used by MethodResult.id. */
-export const METHOD_IDS = [
-  'water',
-  'rtmr',
-  'epl-pdd',
-  'batho',
-  'batho-modified',
-  'etar',
-  'pencil-beam',
-  'superposition',
-  'monte-carlo',
-] as const;
-export type MethodId = (typeof METHOD_IDS)[number];
+import { METHOD_IDS, ONE_D_METHOD_IDS, type MethodId } from '../methodRegistry';
 
-/** The one-dimensional, table-based correction methods (type A). */
-export const ONE_D_METHOD_IDS: readonly MethodId[] = [
-  'rtmr',
-  'epl-pdd',
-  'batho',
-  'batho-modified',
-  'etar',
-];
+/** Method ids as used by MethodResult.id (the registry's, re-exported for the rules). */
+export { METHOD_IDS, ONE_D_METHOD_IDS, type MethodId };
 
 export const WARNING_CODES = [
   'BUILDUP',

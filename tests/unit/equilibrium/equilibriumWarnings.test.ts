@@ -1,3 +1,4 @@
+import type { MethodId } from '../../../src/engine/methodRegistry';
 import { describe, expect, it } from 'vitest';
 import {
   equilibriumWarnings,
@@ -233,7 +234,7 @@ describe('withWarningFlags', () => {
     const ws = equilibriumWarnings(
       input({ beam: { energy: '18MV', ssdCm: 100, fieldXCm: 5, fieldYCm: 5 }, tpr2010: 0.78 }),
     );
-    const result = (id: string): MethodResult => ({
+    const result = (id: MethodId): MethodResult => ({
       id,
       label: id,
       variant: '',

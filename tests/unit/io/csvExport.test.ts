@@ -1,3 +1,4 @@
+import type { MethodId } from '../../../src/engine/methodRegistry';
 import { readFileSync } from 'node:fs';
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
@@ -29,7 +30,7 @@ describe('CSV exports', () => {
     const report = calculateCase(parsed.value, { depthStepCm: 0.5 });
     // An exporter test: a synthetic method curve (1/(1+d)) with one missing value.
     const m: MethodResult = {
-      id: 'synthetic',
+      id: 'synthetic' as MethodId, // an exporter test: any id
       label: 'synthetic',
       variant: '',
       methodClass: 'none',
@@ -61,7 +62,7 @@ describe('CSV exports', () => {
     const report = calculateCase(parsed.value, { depthStepCm: 0.5 });
     const sigma = report.depthCm.map((d) => 0.01 + d / 1000);
     const m: MethodResult = {
-      id: 'stat',
+      id: 'stat' as MethodId, // an exporter test: any id
       label: 'stat',
       variant: '',
       methodClass: 'type C',

@@ -1,3 +1,4 @@
+import type { MethodId } from '../../../src/engine/methodRegistry';
 import { describe, expect, it } from 'vitest';
 import type { MethodResult } from '../../../src/engine/methodResult';
 import { normaliseMethods } from '../../../src/plots/normalise';
@@ -6,7 +7,7 @@ import { densityShade, slabLayout } from '../../../src/plots/slabLayout';
 
 const frame = { width: 420, height: 60, margin: { top: 0, right: 20, bottom: 0, left: 60 } };
 
-function method(id: string, dose: (number | null)[], sigma?: number[]): MethodResult {
+function method(id: MethodId, dose: (number | null)[], sigma?: number[]): MethodResult {
   return {
     id,
     label: id,

@@ -1,9 +1,10 @@
+import type { MethodId } from '../../../src/engine/methodRegistry';
 import { describe, expect, it } from 'vitest';
 import type { CalcReport } from '../../../src/compute/calculateCase';
 import type { MethodResult } from '../../../src/engine/methodResult';
 import { cfSeries, doseSeries } from '../../../src/ui/series';
 
-function method(id: string, dose: (number | null)[]): MethodResult {
+function method(id: MethodId, dose: (number | null)[]): MethodResult {
   return {
     id,
     label: id,

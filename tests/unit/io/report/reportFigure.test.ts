@@ -56,7 +56,7 @@ describe('depthDoseFigure, statistical methods', () => {
     const sigma = water.curve.dosePerMuCGy.map((v) => (v === null ? 0 : 0.02 * v));
     const mc = {
       ...water,
-      id: 'monte-carlo',
+      id: 'monte-carlo' as const,
       label: 'Monte Carlo',
       curve: { ...water.curve, sigmaDosePerMuCGy: sigma },
     };

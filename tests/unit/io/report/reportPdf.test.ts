@@ -1,3 +1,4 @@
+import type { MethodId } from '../../../../src/engine/methodRegistry';
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { calculatePlan, type PlanReport } from '../../../../src/compute/calculatePlan';
@@ -40,7 +41,7 @@ if (!plan.ok) throw new Error('plan must be valid');
 function synthetic(depths: number[], points: { id: string; depthCm: number }[]): MethodResult {
   const dpm = (d: number) => 0.8 * Math.exp(-0.05 * d);
   return {
-    id: 'synthetic',
+    id: 'synthetic' as MethodId, // an exporter test: any id
     label: 'Synthetic exponential',
     variant: 'test curve',
     methodClass: 'none',
