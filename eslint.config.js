@@ -39,6 +39,42 @@ export default defineConfig(
       '@typescript-eslint/no-unsafe-argument': 'off',
     },
   },
+  {
+    // Layering: the engine is pure physics; reading and writing files never needs the calculation
+    // or the page (report types live in src/contract).
+    files: ['src/engine/**/*.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              regex: '(^|/)(io|ui|compute|state|plots|cli|contract)(/|$)',
+              message:
+                'src/engine imports nothing from io, ui, compute, state, plots, cli or contract.',
+            },
+          ],
+        },
+      ],
+    },
+  },
+  {
+    files: ['src/io/**/*.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              regex: '(^|/)(compute|ui|state)(/|$)',
+              message:
+                'src/io imports nothing from compute, ui or state (report types: src/contract).',
+            },
+          ],
+        },
+      ],
+    },
+  },
   reactHooks.configs.flat['recommended-latest'],
   reactRefresh.configs.vite,
   { files: ['**/*.js', '**/*.mjs'], extends: [tseslint.configs.disableTypeChecked] },

@@ -6,7 +6,7 @@ export interface ParsedArgs {
 }
 
 /** Flags that take no value. */
-const BOOLEAN_FLAGS = new Set(['json', 'help', 'batch']);
+const BOOLEAN_FLAGS = new Set(['json', 'help', 'batch', 'jsonl']);
 
 export function parseArgs(argv: readonly string[]): ParsedArgs {
   const files: string[] = [];

@@ -6,8 +6,7 @@ import { readFileSync } from 'node:fs';
 import { summarizeCheck } from '../engine/check/checkSummary';
 import type { Verdict } from '../engine/check/tolerance';
 import { describeProblems } from '../io/caseFile';
-import type { PlanCalcOptions } from '../compute/calculatePlan';
-import { calculateDocument, loadDocument } from './checkCommand';
+import { calculateDocument, jsonOf, loadDocument, type CliCalc } from './checkCommand';
 import { table } from './formatReport';
 
 export interface BatchRow {
@@ -20,7 +19,7 @@ export interface BatchRow {
   verdict: Verdict | 'invalid';
 }
 
-export function batchRows(files: readonly string[], options: PlanCalcOptions): BatchRow[] {
+export function batchRows(files: readonly string[], calc: CliCalc): BatchRow[] {
   return files.map((file): BatchRow => {
     const invalid = (message: string): BatchRow => {
       console.error(`${file}: ${message}`);
@@ -40,10 +39,9 @@ export function batchRows(files: readonly string[], options: PlanCalcOptions): B
     } catch (e) {
       return invalid(`cannot read (${(e as Error).message})`);
     }
-    const doc = loadDocument(text);
-    if (!doc.parsed.ok) return invalid(`invalid file\n${describeProblems(doc.parsed.problems)}`);
-    const result = calculateDocument(doc, options);
-    if (!result) return invalid('not calculated');
+    const answer = calculateDocument(loadDocument(text), calc);
+    if (!answer.ok) return invalid(`invalid file\n${describeProblems(answer.problems)}`);
+    const result = answer.report;
     const s = summarizeCheck(result.check);
     return {
       file,
@@ -83,12 +81,38 @@ export function formatBatch(rows: readonly BatchRow[]): string {
   return `${body}\n\n${rows.length} file(s): ${fails} outside tolerance, ${uncertain > 0 ? `${uncertain} uncertain (Monte Carlo: run longer), ` : ''}${invalid} invalid`;
 }
 
-export function runBatch(
-  files: readonly string[],
-  options: PlanCalcOptions,
-  json: boolean,
-): number {
-  const rows = batchRows(files, options);
+export function runBatch(files: readonly string[], calc: CliCalc, json: boolean): number {
+  const rows = batchRows(files, calc);
   process.stdout.write(json ? `${JSON.stringify(rows, null, 2)}\n` : `${formatBatch(rows)}\n`);
   return batchExitCode(rows);
+}
+
+/**
+ * `--jsonl`: every file's full JSON document (as `--json` prints it for one file) on one line each,
+ * `{"file", "document"}`, or `{"file", "problems"}` for a file that cannot be read or is invalid;
+ * one process for many files. Exit code 2 when any file is invalid, else 0.
+ */
+export function runJsonLines(files: readonly string[], calc: CliCalc): number {
+  let invalid = 0;
+  for (const file of files) {
+    let line: unknown;
+    let text: string | null = null;
+    try {
+      text = readFileSync(file, 'utf8');
+    } catch (e) {
+      line = {
+        file,
+        problems: [{ path: '(file)', message: `cannot read (${(e as Error).message})` }],
+      };
+    }
+    if (text !== null) {
+      const answer = calculateDocument(loadDocument(text), calc);
+      line = answer.ok
+        ? { file, document: jsonOf(answer.report, answer.isPlan) }
+        : { file, problems: answer.problems };
+    }
+    if ((line as { problems?: unknown }).problems) invalid += 1;
+    process.stdout.write(`${JSON.stringify(line)}\n`);
+  }
+  return invalid > 0 ? 2 : 0;
 }

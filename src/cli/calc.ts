@@ -1,20 +1,34 @@
-// `npm run calc -- <case.json> [--json] [--methods id,id,…]`: the same engine as the page, in Node.
+// `npm run calc -- <case.json> [--json] [--methods id,id,…]`: the same calculation contract as the
+// page (src/compute/calcRequest.ts), in Node.
 import { readFileSync } from 'node:fs';
 import { describeProblems } from '../io/caseFile';
+import { PLAN_FORMAT } from '../io/planSchema';
 import { parseArgs } from './args';
-import { runBatch } from './batch';
-import { calculateDocument, jsonOf, loadDocument, planOptionsOf, textOf } from './checkCommand';
+import { runBatch, runJsonLines } from './batch';
+import {
+  calculateDocument,
+  jsonOf,
+  loadDocument,
+  planOptionsOf,
+  textOf,
+  waterSourceOf,
+  WATER_DATA_USAGE,
+  type CliCalc,
+} from './checkCommand';
 import { WATER_TABLE_USAGE, waterTableFromFlags } from './waterTableArgs';
 import { MC_USAGE, mcOptionsOf } from './mcArgs';
 
 const USAGE = `Usage: npm run calc -- <case.json | plan.json> [--json] [--methods id,id,...]
        npm run calc -- --batch <file> <file> ...   (one summary row per file; exit 1 if any check fails or is uncertain)
+       npm run calc -- --jsonl <file> <file> ...   (each file's full JSON document on one line)
   --json          print one JSON document (format "lamina.calc" with a "check" section; a plan
                   file prints "lamina.plancalc")
+  --jsonl         one line per file: {"file", "document"} (the --json document) or {"file", "problems"}
   --methods LIST  comma-separated method ids to compute (default: all available)
   --tolerances H,X  check tolerances in % for homogeneous and heterogeneous paths (default 2,5)
   --prescribe P=D  total dose D (cGy) at point P from all beams: prints the MU per beam
   --check-method ID  method whose verdict decides the check (default: rtmr when available)
+${WATER_DATA_USAGE}
 ${WATER_TABLE_USAGE}
 ${MC_USAGE}`;
 
@@ -35,20 +49,23 @@ function main(argv: string[]): number {
     console.error(`invalid water data\n${table.problems.join('\n')}`);
     return 2;
   }
-  let options;
+  let calc: CliCalc;
   try {
-    options = {
-      ...planOptionsOf(args.flags),
-      ...(table ? { waterData: table.waterData } : {}),
-      ...mcOptionsOf(args.flags),
+    calc = {
+      water: waterSourceOf(
+        args.flags,
+        table?.ok && table.input ? { kind: 'table', table: table.input } : undefined,
+      ),
+      options: { ...planOptionsOf(args.flags), ...mcOptionsOf(args.flags) },
     };
   } catch (e) {
     console.error(`${(e as Error).message}\n${USAGE}`);
     return 2;
   }
   const json = args.flags.get('json') === true;
+  if (args.flags.get('jsonl') === true) return runJsonLines(args.files, calc);
   if (args.flags.get('batch') === true || args.files.length > 1)
-    return runBatch(args.files, options, json);
+    return runBatch(args.files, calc, json);
   const file = args.files[0] as string;
   let text: string;
   try {
@@ -58,16 +75,17 @@ function main(argv: string[]): number {
     return 2;
   }
   const doc = loadDocument(text);
-  const result = calculateDocument(doc, options);
-  if (!doc.parsed.ok || !result) {
-    const problems = doc.parsed.ok ? [] : doc.parsed.problems;
+  const answer = calculateDocument(doc, calc);
+  if (!answer.ok) {
+    const isPlan = doc.ok && (doc.raw as { format?: unknown } | null)?.format === PLAN_FORMAT;
     console.error(
-      `${file}: invalid ${doc.isPlan ? 'plan' : 'case'} file\n${describeProblems(problems)}`,
+      `${file}: invalid ${isPlan ? 'plan' : 'case'} file\n${describeProblems(answer.problems)}`,
     );
     return 2;
   }
-  if (json) process.stdout.write(`${JSON.stringify(jsonOf(result, doc.isPlan), null, 2)}\n`);
-  else process.stdout.write(`${textOf(result, doc.isPlan)}\n`);
+  if (json)
+    process.stdout.write(`${JSON.stringify(jsonOf(answer.report, answer.isPlan), null, 2)}\n`);
+  else process.stdout.write(`${textOf(answer.report, answer.isPlan)}\n`);
   return 0;
 }
 

@@ -1,43 +1,49 @@
 // The check part of the command line: one case or plan file calculated with its point check
-// (text or JSON), and the options shared with batch mode.
-import { calculatePlan, type PlanCalcOptions, type PlanReport } from '../compute/calculatePlan';
-import { DEFAULT_TOLERANCES } from '../engine/check/tolerance';
-import { PLAN_FORMAT } from '../io/planSchema';
-import { validatePlan, type PlanParseResult } from '../io/planFile';
+// (text or JSON) through the same contract as the page (src/compute/calcRequest.ts), and the
+// options shared with batch mode.
+import type { CaseCalcOptions, PlanCalcOverrides, Problem } from '../compute/calcRequest';
+import { calculatePlanRequest, type PlanAnswer } from '../compute/calculationService';
+import { calcDocumentOf } from '../compute/calcDocument';
+import type { WaterSourceSpec } from '../compute/waterSource';
+import type { PlanReport } from '../contract/reports';
 import { monteCarloRecordLines } from '../io/report/monteCarloNote';
 import { formatCheck } from './formatCheck';
 import { formatReport } from './formatReport';
 
-export interface LoadedDocument {
-  isPlan: boolean;
-  parsed: PlanParseResult;
+/** Everything a file is calculated with on the command line. */
+export interface CliCalc {
+  water: WaterSourceSpec;
+  options: CaseCalcOptions & PlanCalcOverrides;
 }
 
-/** Parse case-or-plan text; a case file becomes a one-beam plan. */
-export function loadDocument(text: string): LoadedDocument {
-  let raw: unknown;
+export type ParsedDocument = { ok: true; raw: unknown } | { ok: false; problems: Problem[] };
+
+/** Parse the JSON text of a case or plan file. */
+export function loadDocument(text: string): ParsedDocument {
   try {
-    raw = JSON.parse(text);
+    return { ok: true, raw: JSON.parse(text) as unknown };
   } catch (e) {
     return {
-      isPlan: false,
-      parsed: {
-        ok: false,
-        problems: [{ path: '(file)', message: `not valid JSON: ${(e as Error).message}` }],
-      },
+      ok: false,
+      problems: [{ path: '(file)', message: `not valid JSON: ${(e as Error).message}` }],
     };
   }
-  const isPlan =
-    typeof raw === 'object' && raw !== null && (raw as { format?: unknown }).format === PLAN_FORMAT;
-  return { isPlan, parsed: validatePlan(raw) };
+}
+
+/** The calculation of a parsed document (validation problems come back in the answer). */
+export function calculateDocument(doc: ParsedDocument, calc: CliCalc): PlanAnswer {
+  if (!doc.ok) return doc;
+  return calculatePlanRequest({ purpose: 'plan', plan: doc.raw, ...calc });
 }
 
 /**
  * Options from --methods, --tolerances H,X, --prescribe POINT=DOSE and --check-method ID; throws on
  * a malformed value.
  */
-export function planOptionsOf(flags: Map<string, string | true>): PlanCalcOptions {
-  const options: PlanCalcOptions = {};
+export function planOptionsOf(
+  flags: Map<string, string | true>,
+): CaseCalcOptions & PlanCalcOverrides {
+  const options: CaseCalcOptions & PlanCalcOverrides = {};
   const methods = flags.get('methods');
   if (typeof methods === 'string')
     options.methods = methods
@@ -66,10 +72,28 @@ export function planOptionsOf(flags: Map<string, string | true>): PlanCalcOption
   return options;
 }
 
-/** JSON output: a case keeps the "lamina.calc" document with a `check` section; a plan prints the plan report. */
+export const WATER_DATA_USAGE = `  --water-data case|modelled  water data of the type-A methods: the case's own measured table
+                  when it carries one, else the modelled beam ('case', the default, as on the page),
+                  or always the modelled beam ('modelled')`;
+
+/** The water source from --water-data (and a table read from --tmr/--pdd); throws on a bad value. */
+export function waterSourceOf(
+  flags: Map<string, string | true>,
+  table: WaterSourceSpec | undefined,
+): WaterSourceSpec {
+  const v = flags.get('water-data');
+  if (v !== undefined && v !== 'case' && v !== 'modelled')
+    throw new Error(`--water-data: "${String(v)}" is not one of case, modelled`);
+  if (table) {
+    if (v !== undefined) throw new Error('--water-data cannot be combined with --tmr/--pdd');
+    return table;
+  }
+  return { kind: v === 'modelled' ? 'modelled' : 'case' };
+}
+
+/** JSON output: the document of the calculation (src/compute/calcDocument). */
 export function jsonOf(result: PlanReport, isPlan: boolean): unknown {
-  if (isPlan) return result;
-  return { ...(result.beams[0]?.report ?? {}), check: result.check };
+  return calcDocumentOf(result, isPlan);
 }
 
 export function textOf(result: PlanReport, isPlan: boolean): string {
@@ -85,15 +109,4 @@ export function textOf(result: PlanReport, isPlan: boolean): string {
   const mcLines = monteCarloRecordLines(result.beams);
   if (mcLines.length > 0) parts.push('', ...mcLines);
   return parts.join('\n');
-}
-
-export function calculateDocument(
-  doc: LoadedDocument,
-  options: PlanCalcOptions,
-): PlanReport | null {
-  if (!doc.parsed.ok) return null;
-  return calculatePlan(doc.parsed.value, {
-    ...options,
-    tolerances: options.tolerances ?? doc.parsed.value.tolerances ?? DEFAULT_TOLERANCES,
-  });
 }

@@ -1,6 +1,6 @@
 // Plain-text rendering of a calculation report for the terminal. Stable layout, documented in
 // the README: a header, the layer table, the point table, then one table per method.
-import type { CalcReport } from '../compute/calculateCase';
+import type { CalcReport } from '../contract/reports';
 import type { Warning } from '../engine/equilibrium';
 
 function pad(s: string, n: number): string {

@@ -1,5 +1,5 @@
 // Monte Carlo flags of the calc command line: --mc-histories N [--seed S].
-import type { McCalcOptions } from '../compute/monteCarloForCase';
+import type { McCalcOptions } from '../compute/calculateCase';
 
 export const MC_USAGE = `  --mc-histories N  add the monte-carlo method with N histories (single-threaded here)
   --seed S          Monte Carlo seed (integer, default 1); same seed, same result`;

@@ -39,7 +39,7 @@ function readText(path: string, problems: string[]): string {
 /** The water data asked for on the command line: none, or a built table / its problems. */
 export function waterTableFromFlags(
   flags: Map<string, string | true>,
-): MeasuredTableResult | undefined {
+): (MeasuredTableResult & { input?: MeasuredTableInput }) | undefined {
   const tmr = flags.get('tmr');
   const pdd = flags.get('pdd');
   if (tmr === undefined && pdd === undefined) {
@@ -70,5 +70,6 @@ export function waterTableFromFlags(
     referenceDosePerMuCGy: numberFlag(flags, 'ref-dose', problems),
   };
   if (problems.length > 0) return { ok: false, problems };
-  return buildMeasuredWaterData(input);
+  const built = buildMeasuredWaterData(input);
+  return built.ok ? { ...built, input } : built;
 }

@@ -1,5 +1,8 @@
 // One calculation of a case: geometry, radiological depths and every requested method, in a
 // plain serialisable report. Runs unchanged in a worker, on the main thread and in Node.
+// The deterministic methods (computeCaseParts) and a Monte Carlo run are assembled into the
+// report by one function (assembleReport), which also raises the warnings and puts their flags on
+// every method's points: the CLI's Monte Carlo and the page's worker-pool run go through it alike.
 import { ssdCmOf, fieldAtDepthCm, equivalentSquareCm } from '../engine/beam/geometry';
 import { getMaterial } from '../engine/materials/materialLibrary';
 import {
@@ -10,70 +13,43 @@ import {
 } from '../engine/phantom/slabPhantom';
 import type { MethodResult } from '../engine/methodResult';
 import type { LaminaCase } from '../io/caseSchema';
-import { withWarningFlags, type Warning } from '../engine/equilibrium';
+import { withWarningFlags } from '../engine/equilibrium';
 import { caseWarnings } from './caseWarnings';
 import type { WaterData } from '../engine/beam/waterData';
 import { isTypeAMethodId, typeAForCase, type TypeAVariants } from './typeAForCase';
-import { MONTE_CARLO_METHOD_ID, monteCarloForCase, type McCalcOptions } from './monteCarloForCase';
 import { isTypeBMethodId, typeBForCase } from './typeBForCase';
+import { CALC_FORMAT, CALC_VERSION, CAUTIONS, type CalcReport } from '../contract/reports';
+import { resolveWater } from './waterSource';
+import {
+  calibratedMonteCarloMethod,
+  monteCarloCalibration,
+  monteCarloRunOptions,
+  MONTE_CARLO_METHOD_ID,
+  type McRunOutput,
+} from './monteCarloCalibration';
+import { runMonteCarlo } from '../engine/montecarlo/runMonteCarlo';
 
-export const CALC_FORMAT = 'lamina.calc';
-export const CALC_VERSION = 1;
+export { CALC_FORMAT, CALC_VERSION, CAUTIONS, type CalcReport };
+
+export interface McCalcOptions {
+  histories: number;
+  seed: number;
+  /** Report dose to water instead of dose to medium. */
+  doseToWater?: boolean;
+}
 
 export interface CalcOptions {
   /** Method ids to compute; all available when absent. */
   methods?: readonly string[];
   /** Depth step of the curves (cm). */
   depthStepCm?: number;
-  /** Water data for the type-A methods; the case's inline table when absent. */
+  /** Water data resolved by the caller (src/compute/waterSource); the case's own source when absent. */
   waterData?: WaterData;
   /** Type-A variants (Batho TAR/TMR, ETAR ρ̃ or weights, dose to medium). */
   typeA?: TypeAVariants;
   /** Monte Carlo histories and seed; the monte-carlo method runs only when given. */
   mc?: McCalcOptions;
 }
-
-export interface CalcReport {
-  format: typeof CALC_FORMAT;
-  version: typeof CALC_VERSION;
-  caseName: string;
-  beam: {
-    energy: string;
-    setup: string;
-    ssdCm: number;
-    fieldXCm: number;
-    fieldYCm: number;
-    equivalentSquareAtSurfaceCm: number;
-  };
-  layers: {
-    index: number;
-    materialId: string;
-    material: string;
-    thicknessCm: number;
-    topCm: number;
-    bottomCm: number;
-    densityGPerCm3: number;
-    relativeElectronDensity: number;
-  }[];
-  points: { id: string; depthCm: number; radiologicalDepthCm: number; layerIndex: number }[];
-  /** Depth grid shared by all curves (cm). */
-  depthCm: number[];
-  /** Radiological depth on that grid (cm). */
-  radiologicalDepthCm: number[];
-  methods: MethodResult[];
-  /** Method ids that were asked for but are not available, with the reason. */
-  unavailable: { id: string; reason: string }[];
-  /** Equilibrium and validity warnings (src/engine/equilibrium), sorted by depth. */
-  warnings: Warning[];
-  cautions: string[];
-}
-
-export const CAUTIONS: readonly string[] = [
-  'Lamina is a teaching and independent-check aid, not a treatment-planning or MU-verification system.',
-  'A modelled beam is not a commissioned beam: results depend on the beam data entered or modelled.',
-  'Clinical decisions follow the local protocol and a licensed medical physicist’s judgement.',
-  'Slab phantoms are idealised: laterally infinite flat layers, central axis only, no patient contour or motion.',
-];
 
 export function phantomOfCase(c: LaminaCase): SlabPhantom {
   return makeSlabPhantom(c.layers);
@@ -87,25 +63,76 @@ export function depthGridCm(totalCm: number, stepCm: number): number[] {
   return out;
 }
 
-export function calculateCase(c: LaminaCase, options: CalcOptions = {}): CalcReport {
+/** The deterministic part of a case calculation, before warnings: reused for Monte Carlo merges. */
+export interface CaseParts {
+  case: LaminaCase;
+  phantom: SlabPhantom;
+  grid: number[];
+  requested: readonly string[] | undefined;
+  /** Type-A and type-B results, without warning flags. */
+  methods: MethodResult[];
+  typeAUnavailable: { id: string; reason: string }[];
+  waterData: WaterData | undefined;
+  /** The water method on the grid (for the measured-table Monte Carlo), computed or not asked. */
+  water: MethodResult | undefined;
+}
+
+export function computeCaseParts(c: LaminaCase, options: CalcOptions = {}): CaseParts {
   const phantom = phantomOfCase(c);
-  const ssdCm = ssdCmOf(c.beam.setup);
-  const step = options.depthStepCm ?? 0.05;
-  const grid = depthGridCm(phantom.totalThicknessCm, step);
-  const requested = options.methods ?? [];
-  const typeA = typeAForCase(c, phantom, grid, options.methods, options.waterData, options.typeA);
-  const mc = monteCarloForCase(c, grid, options.methods, options.mc, typeA.waterData);
+  const grid = depthGridCm(phantom.totalThicknessCm, options.depthStepCm ?? 0.05);
+  const resolution = options.waterData ? null : resolveWater(c);
+  const resolved = options.waterData ?? (resolution?.ok ? resolution.waterData : undefined);
+  const typeA = typeAForCase(c, phantom, grid, options.methods, resolved, options.typeA);
   const typeB = typeBForCase(c, phantom, grid, options.methods);
+  const asked = (id: string) => !options.methods || options.methods.includes(id);
+  let water = typeA.methods.find((m) => m.id === 'water');
+  if (!water && asked(MONTE_CARLO_METHOD_ID) && resolved)
+    water = typeAForCase(c, phantom, grid, ['water'], resolved).methods[0];
+  return {
+    case: c,
+    phantom,
+    grid,
+    requested: options.methods,
+    methods: [...typeA.methods, ...typeB],
+    typeAUnavailable: typeA.unavailable,
+    waterData: typeA.waterData,
+    water,
+  };
+}
+
+/**
+ * The report of a case: its deterministic methods plus a Monte Carlo run (calibrated here, once,
+ * for every caller), the warnings of them all and each method's flags.
+ */
+export function assembleReport(
+  parts: CaseParts,
+  mc: { run: McRunOutput; note?: string | null } | { unavailable: string } | null,
+): CalcReport {
+  const c = parts.case;
+  const { phantom, grid } = parts;
+  const ssdCm = ssdCmOf(c.beam.setup);
+  const requested = parts.requested ?? [];
+  const methods = [...parts.methods];
+  const mcUnavailable: { id: string; reason: string }[] = [];
+  if (mc && 'run' in mc) {
+    const calibration = monteCarloCalibration(c, parts.waterData);
+    const m = calibratedMonteCarloMethod(
+      calibration,
+      mc.run,
+      parts.water,
+      parts.waterData?.source ?? 'no water data',
+    );
+    methods.push(mc.note ? { ...m, label: `${m.label} (${mc.note})` } : m);
+  } else if (mc) mcUnavailable.push({ id: MONTE_CARLO_METHOD_ID, reason: mc.unavailable });
   const unavailable = [
-    ...typeA.unavailable,
-    ...mc.unavailable,
+    ...parts.typeAUnavailable,
+    ...mcUnavailable,
     ...requested
       .filter((id) => id !== MONTE_CARLO_METHOD_ID)
       .filter((id) => !isTypeAMethodId(id) && !isTypeBMethodId(id))
       .map((id) => ({ id, reason: `unknown method id "${id}"` })),
   ];
-  const methods = [...typeA.methods, ...typeB, ...mc.methods];
-  const warnings = caseWarnings(c, phantom, methods, typeA.waterData);
+  const warnings = caseWarnings(c, phantom, methods, parts.waterData);
   return {
     format: CALC_FORMAT,
     version: CALC_VERSION,
@@ -148,4 +175,26 @@ export function calculateCase(c: LaminaCase, options: CalcOptions = {}): CalcRep
     warnings,
     cautions: [...CAUTIONS],
   };
+}
+
+/** Run the Monte Carlo of a case in this thread (CLI, tests), calibrated for its water data. */
+export function runMonteCarloForCase(parts: CaseParts, mc: McCalcOptions): McRunOutput {
+  const calibration = monteCarloCalibration(parts.case, parts.waterData);
+  return runMonteCarlo(parts.case, monteCarloRunOptions(calibration, mc), parts.grid);
+}
+
+/** The Monte Carlo block asked of a case: a run, the reason it is not there, or nothing. */
+export function monteCarloBlock(parts: CaseParts, mc: McCalcOptions | undefined) {
+  const asked = parts.requested ? parts.requested.includes(MONTE_CARLO_METHOD_ID) : true;
+  if (!asked) return null;
+  if (!mc)
+    return parts.requested
+      ? { unavailable: 'needs a number of histories (--mc-histories N)' }
+      : null;
+  return { run: runMonteCarloForCase(parts, mc) };
+}
+
+export function calculateCase(c: LaminaCase, options: CalcOptions = {}): CalcReport {
+  const parts = computeCaseParts(c, options);
+  return assembleReport(parts, monteCarloBlock(parts, options.mc));
 }

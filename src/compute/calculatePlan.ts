@@ -1,49 +1,48 @@
-// One calculation of a plan: every beam's case through calculateCase, then the point check
+// One calculation of a plan: every beam's case through the case calculation, then the point check
 // (MU for the prescription, differences from the planning system, verdicts, sums over beams).
-// Plain serialisable data; runs in a worker, on the main thread and in Node.
-import { calculateCase, type CalcOptions, type CalcReport } from './calculateCase';
-import { waterDataForCase } from './typeAForCase';
-import { ssdCmOf } from '../engine/beam/geometry';
-import { dosePerMuFactors, type DosePerMuFactors } from '../engine/check/dosePerMu';
+// Plain serialisable data; runs in a worker, on the main thread and in Node. A Monte Carlo run of
+// the page (McRunAttachment) is merged into the first beam here, when it belongs to that beam.
 import {
-  checkPlan,
-  type CheckBeamInput,
-  type PlanCheck,
-  type Prescription,
-} from '../engine/check/planCheck';
-import { DEFAULT_TOLERANCES, type Tolerances } from '../engine/check/tolerance';
+  assembleReport,
+  computeCaseParts,
+  monteCarloBlock,
+  type CalcOptions,
+  type CaseParts,
+} from './calculateCase';
+import { ssdCmOf } from '../engine/beam/geometry';
+import type { WaterData } from '../engine/beam/waterData';
+import { dosePerMuFactors, type DosePerMuFactors } from '../engine/check/dosePerMu';
+import { checkPlan, type CheckBeamInput } from '../engine/check/planCheck';
+import { DEFAULT_TOLERANCES } from '../engine/check/tolerance';
 import type { LaminaPlan } from '../io/planFile';
+import type { LaminaCase } from '../io/caseSchema';
+import {
+  PLAN_CALC_FORMAT,
+  type CalcReport,
+  type PlanBeamReport,
+  type PlanReport,
+} from '../contract/reports';
+import type { CaseCalcOptions, McRunAttachment, PlanCalcOverrides } from './calcRequest';
+import { CASE_WATER, resolveWater, type WaterSourceSpec } from './waterSource';
+import { monteCarloRunKey } from './monteCarloRunKey';
 
-export interface PlanCalcOptions extends CalcOptions {
-  /** Overrides the plan's tolerances (e.g. edited on the page). */
-  tolerances?: Tolerances;
-  /** Overrides the plan's decisive method. */
-  checkMethodId?: string;
-  /** Overrides the plan's prescription (total dose at a point, all beams). */
-  prescription?: Prescription;
-}
+export type { PlanBeamReport, PlanReport };
 
-export interface PlanBeamReport {
-  id: string;
-  label: string;
-  weight: number;
-  report: CalcReport;
-  /** Water dose-per-MU factor chain (CF = 1) at each point, when the beam has water data. */
-  waterChains: Record<string, DosePerMuFactors>;
-}
-
-export interface PlanReport {
-  format: 'lamina.plancalc';
-  version: 1;
-  planName: string;
-  beams: PlanBeamReport[];
-  check: PlanCheck;
+export interface PlanCalcOptions extends CaseCalcOptions, PlanCalcOverrides {
+  /** Water data of every beam (default: each beam's own source). */
+  water?: WaterSourceSpec;
+  /** Depth step of the curves (cm). */
+  depthStepCm?: number;
+  /** The page's Monte Carlo run, merged into the first beam when it belongs to it. */
+  mcRun?: McRunAttachment | null;
+  /** How a beam's deterministic part is computed (the worker passes a cached one). */
+  partsOf?: (c: LaminaCase, options: CalcOptions) => CaseParts;
 }
 
 /** The check's view of one calculated beam. */
 export function checkInputOf(
   beam: { id: string; label: string; weight: number },
-  c: LaminaPlan['beams'][number]['case'],
+  c: LaminaCase,
   report: CalcReport,
 ): CheckBeamInput {
   return {
@@ -67,15 +66,14 @@ export function checkInputOf(
 
 /** The water factor chain at each point of a case (empty without water data). */
 export function waterChainsOf(
-  c: LaminaPlan['beams'][number]['case'],
-  options: CalcOptions,
+  c: LaminaCase,
+  waterData: WaterData | undefined,
 ): Record<string, DosePerMuFactors> {
-  const wd = waterDataForCase(c, options.waterData);
   const out: Record<string, DosePerMuFactors> = {};
-  if (!wd) return out;
+  if (!waterData) return out;
   for (const p of c.points)
     out[p.id] = dosePerMuFactors({
-      waterData: wd,
+      waterData,
       ssdCm: ssdCmOf(c.beam.setup),
       depthCm: p.depthCm,
       fieldXCm: c.beam.fieldXCm,
@@ -86,14 +84,29 @@ export function waterChainsOf(
 }
 
 export function calculatePlan(plan: LaminaPlan, options: PlanCalcOptions = {}): PlanReport {
-  const { tolerances, checkMethodId, prescription, ...calcOptions } = options;
-  const beams = plan.beams.map((b) => ({
-    id: b.id,
-    label: b.label || b.case.name || b.id,
-    weight: b.weight,
-    report: calculateCase(b.case, calcOptions),
-    waterChains: waterChainsOf(b.case, calcOptions),
-  }));
+  const { tolerances, checkMethodId, prescription, water = CASE_WATER, mcRun } = options;
+  const partsOf = options.partsOf ?? computeCaseParts;
+  const beams: PlanBeamReport[] = plan.beams.map((b, i) => {
+    const resolved = resolveWater(b.case, water);
+    if (!resolved.ok) throw new Error(`water data: ${resolved.problems.join('; ')}`);
+    const parts = partsOf(b.case, {
+      ...(options.methods ? { methods: options.methods } : {}),
+      ...(options.depthStepCm !== undefined ? { depthStepCm: options.depthStepCm } : {}),
+      ...(options.typeA ? { typeA: options.typeA } : {}),
+      ...(resolved.waterData ? { waterData: resolved.waterData } : {}),
+    });
+    const attached =
+      i === 0 && mcRun && mcRun.key === monteCarloRunKey(b.case, water)
+        ? { run: mcRun.run, note: mcRun.note }
+        : null;
+    return {
+      id: b.id,
+      label: b.label || b.case.name || b.id,
+      weight: b.weight,
+      report: assembleReport(parts, attached ?? monteCarloBlock(parts, options.mc)),
+      waterChains: waterChainsOf(b.case, parts.waterData),
+    };
+  });
   const check = checkPlan(
     beams.map((b, i) =>
       checkInputOf(b, (plan.beams[i] as LaminaPlan['beams'][number]).case, b.report),
@@ -104,5 +117,5 @@ export function calculatePlan(plan: LaminaPlan, options: PlanCalcOptions = {}): 
       decisiveMethodId: checkMethodId ?? plan.checkMethodId,
     },
   );
-  return { format: 'lamina.plancalc', version: 1, planName: plan.name, beams, check };
+  return { format: PLAN_CALC_FORMAT, version: 1, planName: plan.name, beams, check };
 }

@@ -1,37 +1,23 @@
 // The compute worker's API: plain functions over structured-cloneable data. No worker globals
-// here, so tests call it through comlink over a MessageChannel and the CLI calls it directly.
-import { calculateCase, type CalcOptions, type CalcReport } from './calculateCase';
+// here, so tests call it through comlink over a MessageChannel and the CLI calls the same
+// functions directly. Calculations go through the one contract (src/compute/calcRequest.ts).
 import { validateCase } from '../io/caseFile';
 import { makeSlabPhantom, radiologicalDepthCurve } from '../engine/phantom/slabPhantom';
 import { depthGridCm } from './calculateCase';
 import type { LayerSpec } from '../engine/phantom/slabPhantom';
-import {
-  buildMeasuredWaterData,
-  type MeasuredTableInput,
-  type MeasuredTableSummary,
-} from '../engine/beam/measuredTable';
-import type { TypeAVariants } from './typeAForCase';
+import type { MeasuredTableInput, MeasuredTableSummary } from '../engine/beam/measuredTable';
 import { ssdCmOf } from '../engine/beam/geometry';
-import { modelledWaterData } from '../engine/beam/modelledBeam';
 import {
   typeBDosePlane,
   type DosePlane,
   type DosePlaneOptions,
 } from '../engine/superposition/typeBMethods';
-
-/**
- * Calculation options that cross the worker boundary: plain data only. The water table travels as
- * CSV text and is rebuilt into WaterData inside the worker.
- */
-export interface WorkerCalcOptions extends Omit<CalcOptions, 'waterData' | 'typeA'> {
-  waterTable?: MeasuredTableInput;
-  /** 'modelled': the modelled beam of the case's energy, in place of any table (page choice). */
-  waterSource?: 'case' | 'modelled';
-  typeA?: Pick<
-    TypeAVariants,
-    'bathoTable' | 'etarRhoTilde' | 'etarScatterLengthCm' | 'doseToMedium' | 'etarKnotStepCm'
-  >;
-}
+import {
+  calculateCaseRequest,
+  calculatePlanRequest,
+  prepareMonteCarlo,
+} from './calculationService';
+import { measuredTableOf } from './waterSource';
 
 export interface RadiologicalCurve {
   depthCm: number[];
@@ -39,6 +25,12 @@ export interface RadiologicalCurve {
 }
 
 export const computeApi = {
+  /** A case for a purpose ('preview' or 'full'); invalid input comes back as problems, never as a throw. */
+  calculateCase: calculateCaseRequest,
+  /** A plan (or a case as a one-beam plan) with its point check (purpose 'plan'). */
+  calculatePlan: calculatePlanRequest,
+  /** Calibration, options and key of a Monte Carlo run of a case (purpose 'monte-carlo'). */
+  prepareMonteCarlo,
   /** Radiological depth against geometric depth through a layer stack. */
   radiologicalDepthCurve(layers: LayerSpec[], stepCm = 0.05): RadiologicalCurve {
     const phantom = makeSlabPhantom(layers);
@@ -47,33 +39,6 @@ export const computeApi = {
       depthCm: grid,
       radiologicalDepthCm: Array.from(radiologicalDepthCurve(phantom, grid)),
     };
-  },
-  /** Validate and calculate a case; invalid input comes back as problems, never as a throw. */
-  calculate(
-    raw: unknown,
-    options: WorkerCalcOptions = {},
-  ):
-    | { ok: true; report: CalcReport }
-    | { ok: false; problems: { path: string; message: string }[] } {
-    const v = validateCase(raw);
-    if (!v.ok) return v;
-    const { waterTable, waterSource, ...rest } = options;
-    if (waterSource === 'modelled')
-      return {
-        ok: true,
-        report: calculateCase(v.value, {
-          ...rest,
-          waterData: modelledWaterData(v.value.beam.energy),
-        }),
-      };
-    if (!waterTable) return { ok: true, report: calculateCase(v.value, rest) };
-    const table = buildMeasuredWaterData(waterTable);
-    if (!table.ok)
-      return {
-        ok: false,
-        problems: table.problems.map((message) => ({ path: 'waterTable', message })),
-      };
-    return { ok: true, report: calculateCase(v.value, { ...rest, waterData: table.waterData }) };
   },
   /**
    * The x–z dose plane (y = 0) and lateral profiles of a case from a type-B engine (default the
@@ -104,7 +69,7 @@ export const computeApi = {
   parseWaterTable(
     input: MeasuredTableInput,
   ): { ok: true; summary: MeasuredTableSummary } | { ok: false; problems: string[] } {
-    const r = buildMeasuredWaterData(input);
+    const r = measuredTableOf(input);
     return r.ok ? { ok: true, summary: r.summary } : r;
   },
 };

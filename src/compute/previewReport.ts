@@ -5,11 +5,11 @@
 // drawn (dimmed), and a full report always replaces the preview.
 import { lerp } from '../engine/units';
 import type { MethodCurve, MethodResult } from '../engine/methodResult';
-import type { CalcReport } from './calculateCase';
-import { TYPE_A_METHOD_IDS } from '../engine/corrections/typeAMethods';
+import type { CalcReport } from '../contract/reports';
+import { FAST_METHOD_IDS, SLOW_METHOD_IDS } from '../engine/methodRegistry';
 
-/** Methods that wait for the full calculation (superposition; Monte Carlo is never recomputed). */
-export const SLOW_METHOD_IDS: readonly string[] = ['superposition', 'monte-carlo'];
+/** Methods that wait for the full calculation (the registry's slow ones). */
+export { SLOW_METHOD_IDS };
 
 /**
  * ETAR in the preview: exact kernel weights at knots at most this far apart (cm), linear between.
@@ -18,11 +18,8 @@ export const SLOW_METHOD_IDS: readonly string[] = ['superposition', 'monte-carlo
  */
 export const PREVIEW_ETAR_KNOT_STEP_CM = 2;
 
-/** Methods computed for the preview: every type-A method, and the pencil beam. */
-export const PREVIEW_METHOD_IDS: readonly string[] = [
-  ...TYPE_A_METHOD_IDS.filter((id) => !SLOW_METHOD_IDS.includes(id)),
-  'pencil-beam',
-];
+/** Methods computed for the preview: the registry's fast ones (type A and the pencil beam). */
+export const PREVIEW_METHOD_IDS: readonly string[] = FAST_METHOD_IDS;
 
 /** Depth step of the preview curves (cm). */
 export const PREVIEW_DEPTH_STEP_CM = 0.2;

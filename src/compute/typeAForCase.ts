@@ -2,13 +2,12 @@
 // case's inline table), which type-A methods were asked for, and their results or the reason they
 // could not be computed.
 import { ssdCmOf } from '../engine/beam/geometry';
-import { buildMeasuredWaterData } from '../engine/beam/measuredTable';
 import type { WaterData } from '../engine/beam/waterData';
 import type {
   CorrectionOptions,
   ScatterWeightFunction,
 } from '../engine/corrections/correctionTypes';
-import { modelledWaterData } from '../engine/beam/modelledBeam';
+import { resolveWater } from './waterSource';
 import { etarScatterWeights } from '../engine/kernels/scatterWeights';
 import { knotInterpolatedWeights } from './etarKnotWeights';
 import { muEnRatioOfLayerForBeam } from '../engine/corrections/doseToMedium';
@@ -50,14 +49,13 @@ export function isTypeAMethodId(id: string): boolean {
 }
 
 /**
- * The caller's water data, else the case's inline table (already validated with the case), else the
- * modelled beam for the case's energy (generated from our own kernels; its source says so).
+ * The caller's water data, else the case's own source (src/compute/waterSource: its inline table,
+ * else the modelled beam for the case's energy).
  */
 export function waterDataForCase(c: LaminaCase, given?: WaterData): WaterData | undefined {
   if (given) return given;
-  if (!c.waterData) return modelledWaterData(c.beam.energy);
-  const built = buildMeasuredWaterData(c.waterData);
-  return built.ok ? built.waterData : undefined;
+  const r = resolveWater(c);
+  return r.ok ? r.waterData : undefined;
 }
 
 /**

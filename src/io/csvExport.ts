@@ -2,7 +2,7 @@
 // (per beam and total). Numbers are written at full precision so the files parse back exactly;
 // a missing value is an empty cell.
 import Papa from 'papaparse';
-import type { CalcReport } from '../compute/calculateCase';
+import type { CalcReport } from '../contract/reports';
 import type { PlanCheck } from '../engine/check/planCheck';
 
 type Cell = string | number | null;

@@ -28,7 +28,9 @@ export function readPrefs(storage: StorageLike | null): Partial<Prefs> {
   if (THEMES.includes(r.theme as Theme)) out.theme = r.theme as Theme;
   if (NORMALISATIONS.includes(r.normalisation as Normalisation))
     out.normalisation = r.normalisation as Normalisation;
-  if (r.waterSource === 'modelled' || r.waterSource === 'table') out.waterSource = r.waterSource;
+  // 'table' (stored before the choice became 'case' | 'modelled') meant the case's own table.
+  if (r.waterSource === 'modelled') out.waterSource = 'modelled';
+  else if (r.waterSource === 'case' || r.waterSource === 'table') out.waterSource = 'case';
   if (Array.isArray(r.hiddenMethods))
     out.hiddenMethods = r.hiddenMethods.filter((m): m is string => typeof m === 'string');
   return out;

@@ -1,7 +1,7 @@
 // The page's one store: the case being edited (with its undo history), field drafts that do not
 // validate yet, view preferences and the latest calculation. Components select single fields.
 import { create } from 'zustand';
-import type { CalcReport } from '../compute/calculateCase';
+import type { CalcReport } from '../contract/reports';
 import type { CaseProblem } from '../io/caseFile';
 import type { LaminaCase } from '../io/caseSchema';
 import { fromCaseFile, type EditorCase } from './editorCase';
@@ -10,8 +10,12 @@ import { PRESETS } from './presets';
 
 export type Normalisation = 'dosePerMu' | 'percentWaterDmax' | 'relativeToWater';
 export type Theme = 'auto' | 'light' | 'dark';
-/** Which water data the type-A methods read: the modelled beam, or the table in the case. */
-export type WaterSource = 'modelled' | 'table';
+/**
+ * Which water data the calculation reads (src/compute/waterSource): the case's own measured table
+ * when it carries one ('case', the default, as on the command line), or the modelled beam chosen
+ * explicitly ('modelled'). Opening another case goes back to 'case'.
+ */
+export type WaterSource = 'case' | 'modelled';
 export type ViewTab = 'dose' | 'cf' | 'water' | 'plane' | 'mc' | 'check';
 
 export interface FieldDraft {
@@ -60,7 +64,7 @@ export const useAppStore = create<AppState>()(() => ({
   hiddenMethods: [],
   hiddenWarningMethods: [],
   theme: 'auto',
-  waterSource: 'modelled',
+  waterSource: 'case',
   tab: 'dose',
   calc: {
     status: 'idle',
@@ -102,7 +106,7 @@ export function redoEdit(): void {
 
 /** Replace the case (file opened, preset picked); the replacement is one undo step. */
 export function replaceCase(c: LaminaCase): void {
-  set({ history: record(seal(get().history), fromCaseFile(c)), drafts: {} });
+  set({ history: record(seal(get().history), fromCaseFile(c)), drafts: {}, waterSource: 'case' });
 }
 
 export function setDraft(path: string, draft: FieldDraft | null): void {

@@ -1,7 +1,7 @@
 // The two comparison views: depth dose (with normalisation) and correction factors (with the
 // path's radiological depth). Both sit under the slab strip and share its depth axis.
 import { memo, useDeferredValue, useMemo } from 'react';
-import type { CalcReport } from '../compute/calculateCase';
+import type { CalcReport } from '../contract/reports';
 import { displayWarnings, visibleWarnings } from '../plots/warnings';
 import { NORMALISATION_LABELS, type NormalisationMode } from '../plots/normalise';
 import { setNormalisation, useAppStore } from '../state/store';

@@ -2,7 +2,7 @@ import { memo } from 'react';
 // Every method's correction factor and dose per MU at each point of interest: one row per
 // method, one column pair per point. A missing value is a dash with its reason (the method's
 // flags at that point), never NaN.
-import type { CalcReport } from '../compute/calculateCase';
+import type { CalcReport } from '../contract/reports';
 import type { MethodPoint } from '../engine/methodResult';
 import { useAppStore } from '../state/store';
 import { methodStyles } from './series';

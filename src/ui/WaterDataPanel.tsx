@@ -127,11 +127,11 @@ export function WaterDataPanel({ width }: { width: number }) {
           <input
             type="radio"
             name="water-source"
-            checked={source === 'table'}
-            onChange={() => setWaterSource('table')}
+            checked={source === 'case'}
+            onChange={() => setWaterSource('case')}
             data-testid="source-table"
           />{' '}
-          Measured table carried in the case
+          The case's own measured table (the default; as on the command line)
           {inCase ? (
             <>
               : <strong>{inCase.fileName}</strong> ({inCase.kind.toUpperCase()}
@@ -141,7 +141,7 @@ export function WaterDataPanel({ width }: { width: number }) {
                 : ', no scatter factors'}
             </>
           ) : (
-            ' (none loaded: the calculation falls back to what the engine provides)'
+            ': none in this case, so the modelled beam is used'
           )}
         </label>
       </fieldset>
@@ -294,7 +294,7 @@ export function WaterDataPanel({ width }: { width: number }) {
             data-testid="use-water"
             onClick={() => {
               editCase((c) => ({ ...c, waterData: check.waterData }));
-              setWaterSource('table');
+              setWaterSource('case');
             }}
           >
             {same ? 'This is the case’s table' : 'Use this table in the case'}

@@ -26,7 +26,7 @@ export function loadDemoTables(): void {
     const check = checkWaterDraft(useWaterDraft.getState());
     if (check.ok) {
       editCase((c) => ({ ...c, waterData: check.waterData }));
-      setWaterSource('table');
+      setWaterSource('case');
     } else
       setNotice({ kind: 'error', title: 'The demo table did not load', lines: check.problems });
   } catch (e) {

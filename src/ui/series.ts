@@ -1,5 +1,5 @@
 // From a report to plottable series: visible methods, their styles and normalised values.
-import type { CalcReport } from '../compute/calculateCase';
+import type { CalcReport } from '../contract/reports';
 import type { CurveSeries } from '../plots/curveLayout';
 import { normaliseMethods, type NormalisationMode } from '../plots/normalise';
 import { seriesStyles } from '../plots/palette';

@@ -10,15 +10,15 @@ import { parsePlanText, serializePlan, validatePlan } from '../../src/io/planFil
 import { firstNonFinite } from '../helpers/allFinite';
 import { malformedPlan, validPlan } from './generators/planArbitraries';
 
-const demoTable = buildMeasuredWaterData({
-  kind: 'tmr',
+const table = {
+  kind: 'tmr' as const,
   fileName: 'demo-6mv-tmr.csv',
   csv: readFileSync('public/tables/demo-6mv-tmr.csv', 'utf8'),
   scatterFileName: 'demo-6mv-scatter.csv',
   scatterCsv: readFileSync('public/tables/demo-6mv-scatter.csv', 'utf8'),
-});
+};
+const demoTable = buildMeasuredWaterData(table);
 if (!demoTable.ok) throw new Error(demoTable.problems.join('\n'));
-const waterData = demoTable.waterData;
 
 describe('plan files under generated input (read → check → report)', () => {
   it('reads or rejects every document with named fields, and calculates what it reads (10 000 documents)', () => {
@@ -44,7 +44,7 @@ describe('plan files under generated input (read → check → report)', () => {
           if (seen.valid % 16 === 0) {
             seen.calculated++;
             const report = calculatePlan(r.value, {
-              waterData,
+              water: { kind: 'table', table },
               methods: ['water', 'batho'],
               depthStepCm: 2,
             });

@@ -39,6 +39,8 @@ export interface McResult {
   referenceDMaxCm: number;
   /** cGy/MU per (Gy·cm² per photon): multiply a dose per fluence by this to get dose per MU. */
   muPerFluence: number;
+  /** CF = D_case/D_water (and its 1σ) at each point of interest (null where not scored). */
+  pointCf: { cf: number | null; sigmaCf: number }[];
   plane: McPlane;
   energyBalance: EnergyTally;
 }
@@ -154,6 +156,13 @@ export function finalizeMonteCarlo(
     depthDose: { case: caseDd, water: waterDd, reference: refDd },
     referenceDMaxCm: max.depthCm,
     muPerFluence,
+    pointCf: plan.points.map((_, i) => {
+      const cfi = cfPoints.value[i] as number;
+      const sigma = cfPoints.sigma[i] as number;
+      return Number.isFinite(cfi) && Number.isFinite(sigma)
+        ? { cf: cfi, sigmaCf: sigma }
+        : { cf: null, sigmaCf: 0 };
+    }),
     plane: planeOf(grid, acc.lateralMean(), phantom, caseScenario.ssdCm, muPerFluence),
     energyBalance: acc.energy(),
   };

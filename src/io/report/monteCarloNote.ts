@@ -1,7 +1,7 @@
 // What the record says about a Monte Carlo result in the check: the run's histories, batches
 // and seed (read back from the method's variant text, which the engine writes) and what the
 // "± σ" values and the "uncertain" verdict mean, so the printed record can be reproduced.
-import type { CalcReport } from '../../compute/calculateCase';
+import type { CalcReport } from '../../contract/reports';
 import { VERDICT_SIGMA_MULTIPLE } from '../../engine/check/checkUncertainty';
 
 export const MONTE_CARLO_METHOD_ID = 'monte-carlo';

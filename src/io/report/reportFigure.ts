@@ -3,7 +3,7 @@
 // method in the page's colour and dash pattern (so the curves differ in greyscale print too) and
 // the page's axis cut above a narrow spike. The PDF and HTML renderers only map it to their own
 // coordinates.
-import type { CalcReport } from '../../compute/calculateCase';
+import type { CalcReport } from '../../contract/reports';
 import { spikeLimit } from '../../plots/curveLayout';
 import { seriesStyles } from '../../plots/palette';
 

@@ -1,8 +1,8 @@
 // The printable record of a point check as plain blocks (headings, paragraphs, tables, the
 // depth-dose figure, lists, the signature line). Pure data: the PDF writer and the page's print
 // view render the same model, and tests read it in Node.
-import type { CalcReport } from '../../compute/calculateCase';
-import type { PlanReport } from '../../compute/calculatePlan';
+import type { CalcReport } from '../../contract/reports';
+import type { PlanReport } from '../../contract/reports';
 import type { PlanCheck } from '../../engine/check/planCheck';
 import type { Verdict } from '../../engine/check/tolerance';
 import type { LaminaPlan } from '../planFile';

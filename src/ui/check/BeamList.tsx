@@ -15,6 +15,8 @@ import { WORKER_PROBLEM_PATH } from './useCheck';
 export function BeamList() {
   const first = useCheckStore((s) => s.firstBeam);
   const extra = useCheckStore((s) => s.extraBeams);
+  const problems = useCheckStore((s) => s.planProblems);
+  const pending = useCheckStore((s) => s.planKey !== s.wantedKey);
   return (
     <div className="check-beams">
       <table className="check-table" data-testid="check-beams">
@@ -72,12 +74,12 @@ export function BeamList() {
                 />
               </td>
               <td>
-                {b.problems.length > 0
-                  ? `invalid: ${b.problems.map((p) => `${p.path}: ${p.message}`).join('; ')}`
-                  : b.report
-                    ? 'calculated'
-                    : 'calculating…'}
-                {b.problems.some((p) => p.path === WORKER_PROBLEM_PATH) ? <RetryButton /> : null}
+                {problems.length > 0
+                  ? `not calculated: ${problems.map((p) => `${p.path}: ${p.message}`).join('; ')}`
+                  : pending
+                    ? 'calculating…'
+                    : 'calculated'}
+                {problems.some((p) => p.path === WORKER_PROBLEM_PATH) ? <RetryButton /> : null}
               </td>
               <td>
                 <button

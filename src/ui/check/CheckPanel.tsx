@@ -16,7 +16,7 @@ import { FigureSvg } from './FigureSvg';
 import { NumInput } from './NumInput';
 import { PlanningValues } from './PlanningValues';
 import { ReportView } from './ReportView';
-import { planReportOf, useCheckView, useExtraBeamCalculations } from './useCheck';
+import { useCheckView, usePlanCalculation } from './useCheck';
 import './check.css';
 
 function Settings({ methods }: { methods: { id: string; label: string }[] }) {
@@ -93,7 +93,7 @@ function Settings({ methods }: { methods: { id: string; label: string }[] }) {
 }
 
 export function CheckPanel() {
-  useExtraBeamCalculations();
+  usePlanCalculation();
   useEffect(() => {
     void openPlanFromAddress();
   }, []);
@@ -109,7 +109,7 @@ export function CheckPanel() {
       view
         ? buildReportModel({
             plan: view.plan,
-            result: planReportOf(view),
+            result: view.result,
             date: new Date(),
             appVersion: APP_VERSION,
           })
@@ -125,8 +125,10 @@ export function CheckPanel() {
       {view ? (
         <>
           <VerdictBanner check={view.check} />
-          {view.pending.length > 0 ? (
-            <p className="empty">Calculating beam(s) {view.pending.join(', ')}…</p>
+          {view.pending ? (
+            <p className="empty" data-testid="check-pending">
+              Calculating the check for the current inputs…
+            </p>
           ) : null}
           <CheckResults check={view.check} />
           {figure ? <FigureSvg ref={figureRef} figure={figure} /> : null}

@@ -11,7 +11,8 @@ import { downloadReportPdf } from '../../io/report/reportPdf';
 import { shareUrlOf } from '../../io/shareLink';
 import { setNotice } from '../../state/store';
 import { downloadBlob, downloadText } from './download';
-import { planReportOf, type CheckView } from './useCheck';
+import { calcDocumentOf } from '../../compute/calcDocument';
+import type { CheckView } from './useCheck';
 
 const CSV = 'text/csv;charset=utf-8';
 
@@ -25,7 +26,7 @@ export function ExportBar({
   const [link, setLink] = useState('');
   const [busy, setBusy] = useState(false);
   const stamp = isoDate(new Date());
-  const isPlan = view.plan.beams.length > 1;
+  const isPlan = view.isPlan;
   const fail = (what: string, e: unknown) =>
     setNotice({
       kind: 'error',
@@ -38,7 +39,7 @@ export function ExportBar({
     try {
       const model = buildReportModel({
         plan: view.plan,
-        result: planReportOf(view),
+        result: view.result,
         date: new Date(),
         appVersion: APP_VERSION,
       });
@@ -128,6 +129,21 @@ export function ExportBar({
           }
         >
           {isPlan ? 'Save plan (JSON)' : 'Save case (JSON)'}
+        </button>
+        <button
+          type="button"
+          disabled={view.pending}
+          data-testid="export-results-json"
+          title="The calculation as the command line's --json document"
+          onClick={() =>
+            downloadText(
+              `${JSON.stringify(calcDocumentOf(view.result, isPlan), null, 2)}\n`,
+              `lamina-results-${stamp}.json`,
+              'application/json',
+            )
+          }
+        >
+          Results (JSON)
         </button>
         <button type="button" onClick={svg}>
           Figure: SVG

@@ -2,12 +2,12 @@
 // the extra beams of a multi-beam plan with their calculations, the prescription, the
 // tolerances and the deciding method. Beam 1 is always the case in the editor.
 import { create } from 'zustand';
-import type { CalcReport } from '../../compute/calculateCase';
+import type { PlanReport } from '../../contract/reports';
 import { DEFAULT_TOLERANCES, type Tolerances } from '../../engine/check/tolerance';
 import type { CaseProblem } from '../../io/caseFile';
 import type { LaminaCase } from '../../io/caseSchema';
 import { toCaseFile } from '../../state/editorCase';
-import { replaceCase, useAppStore } from '../../state/store';
+import { replaceCase, setWaterSource, useAppStore } from '../../state/store';
 
 export interface ExtraBeam {
   key: string;
@@ -15,11 +15,6 @@ export interface ExtraBeam {
   label: string;
   weight: number;
   case: LaminaCase;
-  /** Latest calculation of this beam (null while running). */
-  report: CalcReport | null;
-  /** The page's water-data choice the report was calculated with. */
-  reportSource?: string | undefined;
-  problems: CaseProblem[];
 }
 
 export interface CheckState {
@@ -32,6 +27,12 @@ export interface CheckState {
   prescriptionDoseCGy: number | null;
   tolerances: Tolerances;
   checkMethodId: string;
+  /** The worker's latest plan calculation (src/ui/check/useCheck.ts) and the input it is for. */
+  planReport: PlanReport | null;
+  planProblems: CaseProblem[];
+  planKey: string | null;
+  /** The input last asked for: while it differs from planKey a newer calculation is coming. */
+  wantedKey: string | null;
 }
 
 export const useCheckStore = create<CheckState>()(() => ({
@@ -42,6 +43,10 @@ export const useCheckStore = create<CheckState>()(() => ({
   prescriptionDoseCGy: null,
   tolerances: { ...DEFAULT_TOLERANCES },
   checkMethodId: '',
+  planReport: null,
+  planProblems: [],
+  planKey: null,
+  wantedKey: null,
 }));
 
 const set = useCheckStore.setState;
@@ -61,9 +66,9 @@ export function patchFirstBeam(patch: Partial<CheckState['firstBeam']>): void {
   set({ firstBeam: { ...get().firstBeam, ...patch } });
 }
 
-export function addExtraBeam(b: Omit<ExtraBeam, 'key' | 'report' | 'problems'>): string {
+export function addExtraBeam(b: Omit<ExtraBeam, 'key'>): string {
   const key = newBeamKey();
-  set({ extraBeams: [...get().extraBeams, { ...b, key, report: null, problems: [] }] });
+  set({ extraBeams: [...get().extraBeams, { ...b, key }] });
   return key;
 }
 
@@ -98,9 +103,10 @@ export function swapIntoEditor(key: string): void {
     label: s.firstBeam.label,
     weight: s.firstBeam.weight,
     case: editorCase,
-    report: null,
-    problems: [],
   };
   set({ extraBeams, firstBeam: { id: beam.id, label: beam.label, weight: beam.weight } });
+  // A swap within the plan keeps the page's water-data choice (opening a case resets it).
+  const water = useAppStore.getState().waterSource;
   replaceCase(beam.case);
+  setWaterSource(water);
 }

@@ -3,7 +3,7 @@
 import type { ChangeEvent } from 'react';
 import { parsePlanText, type LaminaPlan } from '../../io/planFile';
 import { decodeShareHash } from '../../io/shareLink';
-import { replaceCase, setNotice, setWaterSource } from '../../state/store';
+import { replaceCase, setNotice } from '../../state/store';
 import {
   addExtraBeam,
   clearExtraBeams,
@@ -16,9 +16,8 @@ import {
 export function loadPlan(plan: LaminaPlan): void {
   const [first, ...rest] = plan.beams;
   if (!first) return;
+  // Every beam reads its own measured table when it carries one (the default water source).
   replaceCase(first.case);
-  // A plan that carries measured tables is checked with them (the page's default is the modelled beam).
-  if (plan.beams.some((b) => b.case.waterData)) setWaterSource('table');
   patchFirstBeam({ id: first.id, label: first.label ?? '', weight: first.weight });
   clearExtraBeams();
   for (const b of rest)

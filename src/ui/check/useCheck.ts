@@ -1,26 +1,40 @@
-// Everything the check panel shows, derived from the editor's case and its latest calculation
-// plus the check inputs: the plan, the point check, and (on demand) the printable record.
+// Everything the check panel shows comes from the compute worker's plan calculation (purpose
+// 'plan', src/compute/calculationService): the plan built from the editor's case and the check
+// inputs, every beam calculated with the page's water source, the page's Monte Carlo run merged
+// into beam 1 while it belongs to it, and the point check. The page only schedules and draws.
 import { useEffect, useMemo } from 'react';
-import type { CalcReport } from '../../compute/calculateCase';
-import { checkInputOf, waterChainsOf, type PlanReport } from '../../compute/calculatePlan';
 import { getComputeWorker } from '../../compute/computeClient';
-import { modelledWaterData } from '../../engine/beam/modelledBeam';
-import { checkPlan, type PlanCheck } from '../../engine/check/planCheck';
+import type { PlanAnswer } from '../../compute/calculationService';
+import type { PlanReport } from '../../contract/reports';
+import type { PlanCheck } from '../../engine/check/planCheck';
 import type { LaminaCase } from '../../io/caseSchema';
 import { PLAN_FORMAT, PLAN_VERSION } from '../../io/planSchema';
 import type { LaminaPlan } from '../../io/planFile';
 import { toCaseFile } from '../../state/editorCase';
-import { useShownReport } from '../montecarlo/useShownReport';
+import { makeLatestOnly } from '../../state/latestOnly';
+import { useMonteCarloStore } from '../../state/monteCarloStore';
 import { onRecalcRequest } from '../../state/recalc';
-import { useAppStore } from '../../state/store';
-import { patchExtraBeam, useCheckStore, type CheckState } from './checkStore';
+import { useAppStore, type WaterSource } from '../../state/store';
+import { currentMcAttachment } from '../montecarlo/mcAttachment';
+import { patchCheck, useCheckStore, type CheckState } from './checkStore';
 
 export interface CheckView {
   plan: LaminaPlan;
-  /** Calculated beams (beams still calculating are left out). */
-  reports: { id: string; label: string; weight: number; case: LaminaCase; report: CalcReport }[];
-  pending: string[];
+  /** The plan as the worker calculated it (one beam per plan beam, in order). */
+  result: PlanReport;
+  /** Calculated beams with their cases, for the figure and the exports. */
+  reports: {
+    id: string;
+    label: string;
+    weight: number;
+    case: LaminaCase;
+    report: PlanReport['beams'][number]['report'];
+  }[];
+  /** The result belongs to an older input: a newer calculation is on its way. */
+  pending: boolean;
   check: PlanCheck;
+  /** Whether the document is a plan (several beams) rather than one case. */
+  isPlan: boolean;
 }
 
 export function planOf(first: LaminaCase, s: CheckState): LaminaPlan {
@@ -50,105 +64,145 @@ export function planOf(first: LaminaCase, s: CheckState): LaminaPlan {
   return plan;
 }
 
+/** A single beam is checked as the case it is (its JSON document is "lamina.calc"). */
+function documentOf(plan: LaminaPlan): unknown {
+  return plan.beams.length > 1 ? plan : { ...plan.beams[0]!.case };
+}
+
+/** Problem path of a plan whose calculation was lost with the compute worker. */
+export const WORKER_PROBLEM_PATH = '(calculation)';
+
+interface PlanInput {
+  key: string;
+  plan: LaminaPlan;
+  water: WaterSource;
+}
+
 /**
- * Keep every extra beam calculated (in the compute worker) whenever its case or the page's
- * water-data choice changes, so all beams read the same kind of water data.
+ * Keep the plan calculated in the compute worker whenever the editor's case, the check inputs,
+ * the water source or the page's Monte Carlo run change (latest wins).
  */
-export function useExtraBeamCalculations(): void {
-  const extra = useCheckStore((s) => s.extraBeams);
-  const source = useAppStore((s) => s.waterSource);
+export function usePlanCalculation(): void {
+  const present = useAppStore((s) => s.history.present);
+  const water = useAppStore((s) => s.waterSource);
+  const mcResult = useMonteCarloStore((s) => s.result);
+  const mcStatus = useMonteCarloStore((s) => s.status);
+  const s = useCheckStore();
+  const {
+    firstBeam,
+    extraBeams,
+    planName,
+    tolerances,
+    prescriptionDoseCGy,
+    prescriptionPointId,
+    checkMethodId,
+  } = s;
+  const input = useMemo((): PlanInput => {
+    const first = toCaseFile(present);
+    const plan = planOf(first, {
+      ...useCheckStore.getState(),
+      firstBeam,
+      extraBeams,
+      planName,
+      tolerances,
+      prescriptionDoseCGy,
+      prescriptionPointId,
+      checkMethodId,
+    });
+    return {
+      key: JSON.stringify([plan, water, mcResult?.histories ?? null, mcStatus]),
+      plan,
+      water,
+    };
+  }, [
+    present,
+    water,
+    mcResult,
+    mcStatus,
+    firstBeam,
+    extraBeams,
+    planName,
+    tolerances,
+    prescriptionDoseCGy,
+    prescriptionPointId,
+    checkMethodId,
+  ]);
+
+  const runner = useMemo(
+    () =>
+      makeLatestOnly(
+        ({ plan, water: w }: PlanInput): Promise<PlanAnswer> => {
+          const first = plan.beams[0]!.case;
+          return getComputeWorker().calculatePlan({
+            purpose: 'plan',
+            plan: documentOf(plan),
+            water: { kind: w },
+            // The check inputs edited on the page (a one-beam document carries none of its own).
+            options: {
+              ...(plan.tolerances ? { tolerances: plan.tolerances } : {}),
+              ...(plan.prescription ? { prescription: plan.prescription } : {}),
+              ...(plan.checkMethodId ? { checkMethodId: plan.checkMethodId } : {}),
+            },
+            mcRun: currentMcAttachment(first, w),
+          });
+        },
+        (result, id) => {
+          const key = keys.get(id);
+          keys.delete(id);
+          if (!result.ok) {
+            const message =
+              result.error instanceof Error ? result.error.message : String(result.error);
+            patchCheck({
+              planProblems: [{ path: WORKER_PROBLEM_PATH, message }],
+              planKey: key ?? null,
+            });
+            return;
+          }
+          const a = result.value;
+          if (a.ok) patchCheck({ planReport: a.report, planProblems: [], planKey: key ?? null });
+          else patchCheck({ planProblems: a.problems, planKey: key ?? null });
+        },
+      ),
+    [],
+  );
   useEffect(() => {
-    for (const b of extra) {
-      if ((b.report && b.reportSource === source) || b.problems.length > 0) continue;
-      const target = b.case;
-      void getComputeWorker()
-        .calculate(target, { waterSource: source === 'modelled' ? 'modelled' : 'case' })
-        .then((r) => {
-          const now = useCheckStore.getState().extraBeams.find((x) => x.key === b.key);
-          if (!now || now.case !== target || useAppStore.getState().waterSource !== source) return;
-          if (r.ok) patchExtraBeam(b.key, { report: r.report, reportSource: source, problems: [] });
-          else patchExtraBeam(b.key, { problems: r.problems });
-        })
-        // The worker was lost (it is replaced on the next call): say so; Retry calculates again.
-        .catch((e: unknown) => {
-          const message = e instanceof Error ? e.message : String(e);
-          patchExtraBeam(b.key, { problems: [{ path: WORKER_PROBLEM_PATH, message }] });
-        });
-    }
-  }, [extra, source]);
+    keys.set(runner.request(input), input.key);
+    patchCheck({ wantedKey: input.key });
+  }, [runner, input]);
   useEffect(
     () =>
       onRecalcRequest(() => {
-        for (const b of useCheckStore.getState().extraBeams)
-          if (b.problems.some((p) => p.path === WORKER_PROBLEM_PATH))
-            patchExtraBeam(b.key, { problems: [] });
+        if (useCheckStore.getState().planProblems.some((p) => p.path === WORKER_PROBLEM_PATH)) {
+          keys.set(runner.request(input), input.key);
+        }
       }),
-    [],
+    [runner, input],
   );
 }
+const keys = new Map<number, string>();
 
-/** Problem path of a beam whose calculation was lost with the compute worker. */
-export const WORKER_PROBLEM_PATH = '(calculation)';
-
-/**
- * The check of the plan whose first beam is the case being edited. The first beam's report is the
- * drawn one: the latest calculation plus the page's Monte Carlo run (with its 1σ) while that run
- * belongs to the case as it is now — a run left stale by an edit is not checked.
- */
+/** The check view: the worker's last plan report with the plan it was calculated for. */
 export function useCheckView(): CheckView | null {
   const present = useAppStore((s) => s.history.present);
-  const report = useShownReport();
   const s = useCheckStore();
   return useMemo(() => {
-    if (!report) return null;
-    const first = toCaseFile(present);
-    const plan = planOf(first, s);
-    const reports: CheckView['reports'] = [];
-    const pending: string[] = [];
-    plan.beams.forEach((b, i) => {
-      const r = i === 0 ? report : (s.extraBeams[i - 1]?.report ?? null);
-      if (r)
-        reports.push({
-          id: b.id,
-          label: b.label ?? b.case.name,
-          weight: b.weight,
-          case: b.case,
-          report: r,
-        });
-      else pending.push(b.id);
-    });
-    const check = checkPlan(
-      reports.map((b) => checkInputOf(b, b.case, b.report)),
-      {
-        tolerances: s.tolerances,
-        prescription: plan.prescription,
-        decisiveMethodId: s.checkMethodId || undefined,
-      },
-    );
-    return { plan, reports, pending, check };
-  }, [present, report, s]);
-}
-
-/**
- * The plan report the record is built from. The water factor chains are computed here from the
- * same water data the page's calculation used (the modelled beam, or the case's table).
- */
-export function planReportOf(view: CheckView): PlanReport {
-  const modelled = useAppStore.getState().waterSource === 'modelled';
-  return {
-    format: 'lamina.plancalc',
-    version: 1,
-    planName: view.plan.name,
-    beams: view.reports.map((b) => ({
+    const result = s.planReport;
+    if (!result) return null;
+    const plan = planOf(toCaseFile(present), s);
+    const reports = result.beams.map((b, i) => ({
       id: b.id,
       label: b.label,
       weight: b.weight,
+      case: plan.beams[i]?.case ?? toCaseFile(present),
       report: b.report,
-      waterChains: waterChainsOf(
-        b.case,
-        modelled ? { waterData: modelledWaterData(b.case.beam.energy) } : {},
-      ),
-    })),
-    check: view.check,
-  };
+    }));
+    return {
+      plan,
+      result,
+      reports,
+      pending: s.planKey !== s.wantedKey,
+      check: result.check,
+      isPlan: plan.beams.length > 1,
+    };
+  }, [present, s]);
 }

@@ -1,10 +1,10 @@
 // The "Monte Carlo run" view: settings, Start/Cancel, progress with live 1σ at the points of
 // interest, and what the run models. The run belongs to the case it was started for: once the
 // case is edited its result is marked stale and left out of the depth-dose and CF views.
-import { depthGridCm } from '../../compute/calculateCase';
+import { getComputeWorker } from '../../compute/computeClient';
 import { validateCase } from '../../io/caseFile';
-import { toCaseFile, totalThicknessCm } from '../../state/editorCase';
-import { useMonteCarloStore, type McRunStatus } from '../../state/monteCarloStore';
+import { toCaseFile } from '../../state/editorCase';
+import { setMonteCarlo, useMonteCarloStore, type McRunStatus } from '../../state/monteCarloStore';
 import { useAppStore } from '../../state/store';
 import { McExplanation } from './McExplanation';
 import { McProgressView } from './McProgressView';
@@ -22,15 +22,8 @@ const STATUS_TEXT: Record<McRunStatus, string> = {
   failed: 'Failed.',
 };
 
-function gridFor(reportGrid: readonly number[] | undefined, totalCm: number): number[] {
-  const last = reportGrid?.[reportGrid.length - 1];
-  if (reportGrid && last !== undefined && Math.abs(last - totalCm) < 1e-9) return [...reportGrid];
-  return depthGridCm(totalCm, 0.05);
-}
-
 export function MonteCarloPanel() {
   const present = useAppStore((s) => s.history.present);
-  const reportGrid = useAppStore((s) => s.calc.report?.depthCm);
   const mc = useMonteCarloStore();
   const run = useMcForm((s) => s.run);
   const currentKey = useCurrentMcCaseKey();
@@ -43,16 +36,27 @@ export function MonteCarloPanel() {
 
   const onStart = (histories: number, seed: number, doseToWater: boolean) => {
     if (!valid.ok) return;
-    const waterSource = (useAppStore.getState() as { waterSource?: string }).waterSource;
-    startRun({
-      caseData: valid.value,
-      caseKey: currentKey,
-      histories,
-      seed,
-      doseToWater,
-      waterSource,
-      depthGridCm: gridFor(reportGrid, totalThicknessCm(present)),
-    });
+    const caseData = valid.value;
+    // Calibration, engine options and the run's key come from the compute worker (one place for
+    // the CLI and the page); the batches then run on the Monte Carlo worker pool.
+    void getComputeWorker()
+      .prepareMonteCarlo({
+        purpose: 'monte-carlo',
+        case: caseData,
+        water: { kind: useAppStore.getState().waterSource },
+        run: { histories, seed, doseToWater },
+      })
+      .then((setup) => {
+        if (setup.ok) startRun({ caseData, setup, histories, seed, doseToWater });
+        else
+          setMonteCarlo({
+            status: 'failed',
+            error: setup.problems.map((p) => `${p.path}: ${p.message}`).join('; '),
+          });
+      })
+      .catch((e: unknown) =>
+        setMonteCarlo({ status: 'failed', error: e instanceof Error ? e.message : String(e) }),
+      );
   };
 
   return (
@@ -79,9 +83,11 @@ export function MonteCarloPanel() {
       {run ? (
         <p className="hint" data-testid="mc-run-settings">
           Run: {groupDigits(run.histories)} histories per run, seed {run.seed},{' '}
-          {run.doseToWater ? 'dose to water' : 'dose to medium'}; dose per MU from the calibration
-          run × {run.calibration.referenceDosePerMuCGy} cGy/MU × S_c{' '}
-          {run.calibration.collimatorScatterFactor.toFixed(3)} ({run.calibration.source}).
+          {run.doseToWater ? 'dose to water' : 'dose to medium'}; dose per MU:{' '}
+          {run.calibration.mode === 'cf-times-water'
+            ? run.calibration.source
+            : `calibration run × ${run.calibration.referenceDosePerMuCGy} cGy/MU × S_c ${run.calibration.collimatorScatterFactor.toFixed(3)} (${run.calibration.source})`}
+          .
         </p>
       ) : null}
       {mc.status !== 'idle' ? (

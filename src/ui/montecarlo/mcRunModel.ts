@@ -1,6 +1,6 @@
-// Pure helpers of the page's Monte Carlo run: which case a run belongs to (its key), the typed
-// histories and seed checked with a message, and the wording of progress and uncertainty.
-import type { EditorCase } from '../../state/editorCase';
+// Pure helpers of the page's Monte Carlo run: the typed histories and seed checked with a message,
+// whether a run is the current case's (its key: src/compute/monteCarloRunKey), and the wording of
+// progress and uncertainty.
 
 /** Histories per scenario offered as presets (case, water and calibration runs each get these). */
 export const HISTORY_PRESETS: readonly { histories: number; label: string }[] = [
@@ -50,24 +50,16 @@ export function groupDigits(n: number): string {
   return n < 0 ? `−${grouped}` : grouped;
 }
 
-/**
- * The key a run is tied to: what the Monte Carlo result depends on (beam, layers, points, water
- * data and which water data the page uses for the dose-per-MU calibration). The case name,
- * notes and layer labels do not change the result, so editing them does not make a run stale.
- */
-export function monteCarloCaseKey(c: EditorCase, waterSource: string | undefined): string {
-  return JSON.stringify({
-    beam: c.beam,
-    layers: c.layers.map((l) => [l.materialId, l.thicknessCm, l.densityGPerCm3 ?? null]),
-    points: c.points.map((p) => [p.id, p.depthCm]),
-    waterData: waterSource === 'modelled' ? null : (c.waterData ?? null),
-    waterSource: waterSource ?? null,
-  });
-}
-
 /** A run's result is shown only while the case it was started for is the current one. */
 export function isRunCurrent(runKey: string | null, currentKey: string): boolean {
   return runKey !== null && runKey === currentKey;
+}
+
+/** Words added to the MC label in legends and tables while its result is not a finished run. */
+export function partialRunNote(status: string): string | null {
+  if (status === 'running') return 'running, partial';
+  if (status === 'cancelled') return 'cancelled, partial';
+  return null;
 }
 
 /** "0.782 ± 0.004 cGy/MU" and "0.51 %" for a dose and its 1σ. */

@@ -5,7 +5,8 @@ import { create } from 'zustand';
 import { startMonteCarlo, type McPoolOptions, type McRunHandle } from '../../compute/mcPool';
 import { setMonteCarlo, useMonteCarloStore } from '../../state/monteCarloStore';
 import type { LaminaCase } from '../../io/caseSchema';
-import { monteCarloCalibration, type McCalibration } from './mcCalibration';
+import type { McCalibration } from '../../compute/monteCarloCalibration';
+import type { McSetup } from '../../compute/calculationService';
 
 /** The form of the panel (kept when switching views) and what the current run was started with. */
 export interface McForm {
@@ -38,13 +39,11 @@ let runCounter = 0;
 
 export interface StartRequest {
   caseData: LaminaCase;
-  caseKey: string;
+  /** Calibration, engine options, key and depth grid, prepared by the compute worker. */
+  setup: McSetup;
   histories: number;
   seed: number;
   doseToWater: boolean;
-  waterSource?: string | undefined;
-  /** The report's depth grid, so the MC curve lines up with the other methods. */
-  depthGridCm: readonly number[];
   /** Worker count and factory (tests run the batches in-process); browser workers by default. */
   pool?: Pick<McPoolOptions, 'workers' | 'createWorker'>;
 }
@@ -52,7 +51,7 @@ export interface StartRequest {
 export function startRun(req: StartRequest): void {
   cancelRun();
   const id = ++runCounter;
-  const calibration = monteCarloCalibration(req.caseData, req.waterSource);
+  const { calibration } = req.setup;
   patchMcForm({
     run: {
       histories: req.histories,
@@ -64,7 +63,7 @@ export function startRun(req: StartRequest): void {
   });
   setMonteCarlo({
     status: 'running',
-    caseKey: req.caseKey,
+    caseKey: req.setup.key,
     result: null,
     progress: null,
     error: null,
@@ -73,19 +72,12 @@ export function startRun(req: StartRequest): void {
   try {
     handle = startMonteCarlo(
       req.caseData,
-      {
-        histories: req.histories,
-        seed: req.seed,
-        doseToWater: req.doseToWater,
-        referenceDosePerMuCGy: calibration.referenceDosePerMuCGy,
-        collimatorScatterFactor: calibration.collimatorScatterFactor,
-        referenceDMaxCm: calibration.referenceDMaxCm,
-      },
+      req.setup.options,
       (p) => {
         if (id !== runCounter) return;
         setMonteCarlo({ progress: p, result: p.partial ?? useMonteCarloStore.getState().result });
       },
-      { ...req.pool, depthGridCm: req.depthGridCm },
+      { ...req.pool, depthGridCm: req.setup.depthGridCm },
     );
   } catch (e) {
     setMonteCarlo({ status: 'failed', error: messageOf(e) });

@@ -1,28 +1,22 @@
-// The report the depth-dose and CF views draw: the latest calculation plus the Monte Carlo curve
-// of the page's run while that run belongs to the case being edited (live while it runs).
+// The report the depth-dose and CF views draw: the latest calculation from the compute worker,
+// which already carries the page's Monte Carlo run while that run belongs to the case being edited
+// (merged, calibrated and flagged in the worker: src/compute/calculationService).
 import { useMemo } from 'react';
-import type { CalcReport } from '../../compute/calculateCase';
-import { useMonteCarloStore } from '../../state/monteCarloStore';
+import { monteCarloRunKey } from '../../compute/monteCarloRunKey';
+import type { CalcReport } from '../../contract/reports';
+import { toCaseFile } from '../../state/editorCase';
 import { useAppStore } from '../../state/store';
-import { partialRunNote, withMonteCarloMethod } from './mergeMonteCarlo';
-import { isRunCurrent, monteCarloCaseKey } from './mcRunModel';
 
-/** The key of the case being edited, as the Monte Carlo run store keys runs. */
+/** The run key of the case being edited with the page's water source (src/compute/monteCarloRunKey). */
 export function useCurrentMcCaseKey(): string {
   const present = useAppStore((s) => s.history.present);
-  const waterSource = useAppStore((s) => (s as { waterSource?: string }).waterSource);
-  return useMemo(() => monteCarloCaseKey(present, waterSource), [present, waterSource]);
+  const waterSource = useAppStore((s) => s.waterSource);
+  return useMemo(
+    () => monteCarloRunKey(toCaseFile(present), { kind: waterSource }),
+    [present, waterSource],
+  );
 }
 
 export function useShownReport(): CalcReport | null {
-  const report = useAppStore((s) => s.calc.report);
-  const runKey = useMonteCarloStore((s) => s.caseKey);
-  const method = useMonteCarloStore((s) => s.result?.method);
-  const note = useMonteCarloStore((s) => partialRunNote(s.status));
-  const currentKey = useCurrentMcCaseKey();
-  const current = isRunCurrent(runKey, currentKey);
-  return useMemo(
-    () => withMonteCarloMethod(report, method, current, note),
-    [report, method, current, note],
-  );
+  return useAppStore((s) => s.calc.report);
 }

@@ -26,12 +26,14 @@ function calc(args: string[]) {
   return { code: r.status, out: r.stdout, err: r.stderr };
 }
 
+const CASE_WATER = { kind: 'case' } as const;
+
 function run(file: string, flags: string[] = []) {
   const doc = loadDocument(readFileSync(file, 'utf8'));
   const options = planOptionsOf(new Map(Object.entries(flagMap([...flags, ...METHODS]))));
-  const result = calculateDocument(doc, options);
-  if (!result) throw new Error(`${file} must be valid`);
-  return { doc, result };
+  const answer = calculateDocument(doc, { water: CASE_WATER, options });
+  if (!answer.ok) throw new Error(`${file} must be valid`);
+  return { doc: { isPlan: answer.isPlan }, result: answer.report };
 }
 
 function flagMap(args: string[]): Record<string, string> {
@@ -44,7 +46,10 @@ function flagMap(args: string[]): Record<string, string> {
 const WATER = 'public/cases/water-reference-6mv.json'; // planning value 0.8 % from RTMR: passes 2 %
 const PLAN = 'public/cases/opposed-pair-chest-6mv.plan.json'; // ≈ 1 % per beam: passes 5 %
 const AIR = 'public/cases/air-gap-6mv-small-field.json'; // 7 % apart: fails 5 %
-const options = planOptionsOf(new Map(Object.entries(flagMap(METHODS))));
+const options = {
+  water: CASE_WATER,
+  options: planOptionsOf(new Map(Object.entries(flagMap(METHODS)))),
+};
 
 describe('calc CLI: point check', () => {
   it('textOf(...) prints the point table and the verdict for a case file', () => {
@@ -97,7 +102,9 @@ describe('calc CLI: point check', () => {
 
   it('planOptionsOf(--tolerances) widens the action levels and rejects malformed values', () => {
     const wide = planOptionsOf(new Map([['tolerances', '8,8']]));
-    expect(batchExitCode(batchRows([AIR], { ...options, ...wide }))).toBe(0);
+    expect(
+      batchExitCode(batchRows([AIR], { ...options, options: { ...options.options, ...wide } })),
+    ).toBe(0);
     expect(() => planOptionsOf(new Map([['tolerances', 'x']]))).toThrow(/two positive percentages/);
   });
 

@@ -32,8 +32,8 @@ describe('computeApi over comlink', () => {
     expect(c.radiologicalDepthCm.at(-1)).toBeCloseTo(7.5, 12);
   });
 
-  it('calculate validates and reports radiological depths at the points', async () => {
-    const r = await remote.calculate(demo);
+  it('calculateCase validates and reports radiological depths at the points', async () => {
+    const r = await remote.calculateCase({ purpose: 'full', case: demo, water: { kind: 'case' } });
     expect(r.ok).toBe(true);
     if (!r.ok) return;
     const p1 = r.report.points.find((p) => p.id === 'P1');
@@ -41,8 +41,12 @@ describe('computeApi over comlink', () => {
     expect(p1?.radiologicalDepthCm).toBeCloseTo(7 * 1.05016 + 8 * 0.257838, 3);
   });
 
-  it('calculate returns problems, not a throw, for an invalid case', async () => {
-    const r = await remote.calculate({ format: 'lamina.case', version: 1 });
+  it('calculateCase returns problems, not a throw, for an invalid case', async () => {
+    const r = await remote.calculateCase({
+      purpose: 'full',
+      case: { format: 'lamina.case', version: 1 },
+      water: { kind: 'case' },
+    });
     expect(r.ok).toBe(false);
     if (!r.ok) expect(r.problems.length).toBeGreaterThan(0);
   });

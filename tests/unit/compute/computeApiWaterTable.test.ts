@@ -48,11 +48,15 @@ describe('computeApi water tables over comlink', () => {
     );
   });
 
-  it('calculate rebuilds the water data from CSV text and returns type-A methods', async () => {
-    const r = await remote.calculate(demo, {
-      methods: ['rtmr', 'etar'],
-      waterTable: { kind: 'tmr', fileName: 'demo-6mv-tmr.csv', csv: TMR_CSV, dMaxCm: 1.5 },
-      typeA: { etarRhoTilde: 0.5 },
+  it('calculateCase rebuilds the water data from CSV text and returns type-A methods', async () => {
+    const r = await remote.calculateCase({
+      purpose: 'full',
+      case: demo,
+      water: {
+        kind: 'table',
+        table: { kind: 'tmr', fileName: 'demo-6mv-tmr.csv', csv: TMR_CSV, dMaxCm: 1.5 },
+      },
+      options: { methods: ['rtmr', 'etar'], typeA: { etarRhoTilde: 0.5 } },
     });
     expect(r.ok).toBe(true);
     if (!r.ok) return;
@@ -60,9 +64,11 @@ describe('computeApi water tables over comlink', () => {
     expect(r.report.methods[1]?.variant).toMatch(/ρ̃ = 0\.5 \(entered\)/);
   });
 
-  it('calculate reports an invalid water table as problems on "waterTable"', async () => {
-    const r = await remote.calculate(demo, {
-      waterTable: { kind: 'pdd', fileName: 'p.csv', csv: TMR_CSV },
+  it('calculateCase reports an invalid water table as problems on "waterTable"', async () => {
+    const r = await remote.calculateCase({
+      purpose: 'full',
+      case: demo,
+      water: { kind: 'table', table: { kind: 'pdd', fileName: 'p.csv', csv: TMR_CSV } },
     });
     expect(r.ok).toBe(false);
     expect(!r.ok && r.problems[0]).toEqual({

@@ -1,6 +1,7 @@
 // The page's Monte Carlo run helpers: typed histories and seed, the case key that ties a run to
 // its case, and the wording of progress and uncertainty.
 import { describe, expect, it } from 'vitest';
+import { monteCarloRunKey } from '../../../src/compute/monteCarloRunKey';
 import {
   HISTORY_LIMITS,
   HISTORY_PRESETS,
@@ -9,17 +10,19 @@ import {
   fractionDone,
   groupDigits,
   isRunCurrent,
-  monteCarloCaseKey,
   parseHistories,
   parseSeed,
   projectedRelativeSigma,
   remainingMs,
 } from '../../../src/ui/montecarlo/mcRunModel';
 import { expectRelClose } from '../../helpers/expectClose';
-import { fromCaseFile } from '../../../src/state/editorCase';
+import { fromCaseFile, toCaseFile, type EditorCase } from '../../../src/state/editorCase';
 import { PRESETS } from '../../../src/state/presets';
 
 const chest = () => fromCaseFile(PRESETS[0]!.make());
+/** The run key of an editor case (src/compute/monteCarloRunKey), as the page computes it. */
+const monteCarloCaseKey = (c: EditorCase, water: 'case' | 'modelled') =>
+  monteCarloRunKey(toCaseFile(c), { kind: water });
 
 describe('parseHistories', () => {
   it('parseHistories(...) reads plain, grouped and exponent forms', () => {
@@ -116,7 +119,12 @@ describe('monteCarloCaseKey', () => {
     expect(monteCarloCaseKey(wider, 'modelled')).not.toBe(key);
     const moved = { ...c, points: c.points.map((p) => ({ ...p, depthCm: p.depthCm + 1 })) };
     expect(monteCarloCaseKey(moved, 'modelled')).not.toBe(key);
-    expect(monteCarloCaseKey(c, 'table')).not.toBe(key);
+    // The same case with its own measured table: 'case' reads the table, so the key differs.
+    const table = fromCaseFile({
+      ...PRESETS[0]!.make(),
+      waterData: { kind: 'tmr', fileName: 't.csv', csv: 'd,10\n1.5,1\n10,0.8\n' },
+    });
+    expect(monteCarloCaseKey(table, 'case')).not.toBe(monteCarloCaseKey(table, 'modelled'));
   });
 
   it('a fresh copy of the same case (new editor keys) has the same key', () => {

@@ -5,12 +5,13 @@
 import { describe, expect, it } from 'vitest';
 import type { McWorkerHandle } from '../../../src/compute/mcPool';
 import { calculateCase } from '../../../src/compute/calculateCase';
+import { calculateCaseRequest, prepareMonteCarlo } from '../../../src/compute/calculationService';
 import { runBatch } from '../../../src/engine/montecarlo/runBatch';
 import type { LaminaCase } from '../../../src/io/caseSchema';
 import { CASE_FORMAT, CASE_VERSION } from '../../../src/io/caseSchema';
 import { useMonteCarloStore, type MonteCarloState } from '../../../src/state/monteCarloStore';
 import { cancelRun, startRun, useMcForm } from '../../../src/ui/montecarlo/mcRunner';
-import { partialRunNote, withMonteCarloMethod } from '../../../src/ui/montecarlo/mergeMonteCarlo';
+import { partialRunNote } from '../../../src/ui/montecarlo/mcRunModel';
 import { cfSeries, doseSeries } from '../../../src/ui/series';
 
 const CASE: LaminaCase = {
@@ -47,14 +48,24 @@ function whenStatus(ok: (s: MonteCarloState) => boolean): Promise<MonteCarloStat
   });
 }
 
+function setupOf(caseKey: string, histories: number) {
+  const setup = prepareMonteCarlo({
+    purpose: 'monte-carlo',
+    case: CASE,
+    water: { kind: 'modelled' },
+    run: { histories, seed: 7 },
+  });
+  if (!setup.ok) throw new Error('setup');
+  // A distinct key per test run, so the store's key says which run wrote it.
+  return { ...setup, key: caseKey };
+}
+
 const request = (caseKey: string, histories: number, delayMs = 0) => ({
   caseData: CASE,
-  caseKey,
+  setup: setupOf(caseKey, histories),
   histories,
   seed: 7,
   doseToWater: false,
-  waterSource: 'modelled',
-  depthGridCm: REPORT.depthCm,
   pool: { workers: 2, createWorker: () => localWorker(delayMs) },
 });
 
@@ -109,14 +120,33 @@ describe('startRun / cancelRun', () => {
   });
 });
 
-describe('withMonteCarloMethod', () => {
-  it('adds the MC method to the report only while the run is current and on the same grid', async () => {
-    startRun(request('merge', 2000));
+describe('the run in the report (merged by the worker)', () => {
+  it('a run of the case is merged into the full report with its ±1σ, another key is not', async () => {
+    const key = prepareMonteCarlo({
+      purpose: 'monte-carlo',
+      case: CASE,
+      water: { kind: 'modelled' },
+      run: { histories: 2000, seed: 7 },
+    });
+    if (!key.ok) throw new Error('setup');
+    startRun({ ...request('merge', 2000), setup: key });
     const { result } = await whenStatus((s) => s.status === 'done');
-    const mc = result!.method;
-    const merged = withMonteCarloMethod(REPORT, mc, true);
+    const run = result!;
+    const full = (k: string, note: string | null = null) => {
+      const r = calculateCaseRequest({
+        purpose: 'full',
+        case: CASE,
+        water: { kind: 'modelled' },
+        options: { methods: ['water', 'pencil-beam'] },
+        mcRun: { key: k, run, note },
+      });
+      if (!r.ok) throw new Error('valid case');
+      return r.report;
+    };
+    const merged = full(key.key);
     expect(merged.methods.map((m) => m.id)).toEqual(['water', 'pencil-beam', 'monte-carlo']);
-    expect(withMonteCarloMethod(merged, mc, true).methods).toHaveLength(3);
+    expect(merged.depthCm).toEqual(REPORT.depthCm);
+    const mc = merged.methods.at(-1)!;
     // The CF and dose views draw a ±1σ band for the MC curve only.
     const cf = cfSeries(merged, []);
     expect(cf.find((c) => c.id === 'monte-carlo')?.sigma).toEqual(mc.curve.sigmaCf);
@@ -125,16 +155,10 @@ describe('withMonteCarloMethod', () => {
     expect(dose.ok && dose.series.find((c) => c.id === 'monte-carlo')?.sigma).toEqual(
       mc.curve.sigmaDosePerMuCGy,
     );
-    expect(withMonteCarloMethod(REPORT, mc, false)).toBe(REPORT);
-    expect(withMonteCarloMethod(REPORT, null, true)).toBe(REPORT);
-    expect(withMonteCarloMethod(null, mc, true)).toBeNull();
-    const otherGrid = { ...REPORT, depthCm: REPORT.depthCm.map((d) => d * 1.1) };
-    expect(withMonteCarloMethod(otherGrid, mc, true)).toBe(otherGrid);
-    const running = withMonteCarloMethod(REPORT, mc, true, partialRunNote('running'));
+    expect(full('another case').methods.map((m) => m.id)).toEqual(['water', 'pencil-beam']);
+    const running = full(key.key, partialRunNote('running'));
     expect(running.methods.at(-1)?.label).toBe('Monte Carlo (running, partial)');
     expect(partialRunNote('cancelled')).toBe('cancelled, partial');
     expect(partialRunNote('done')).toBeNull();
-    const otherPoints = { ...REPORT, points: [] };
-    expect(withMonteCarloMethod(otherPoints, mc, true)).toBe(otherPoints);
   });
 });

@@ -1,0 +1,163 @@
+// The worker side of the calculation contract (src/compute/calcRequest.ts): validates the
+// document, resolves the water data once, fixes grid and methods by purpose, reuses the
+// deterministic part of recent full calculations (a Monte Carlo merge or a plan then costs only
+// its assembly) and answers with plain data. The page's workers, the worker API tests and the CLI
+// all call these functions.
+import {
+  assembleReport,
+  computeCaseParts,
+  depthGridCm,
+  monteCarloBlock,
+  phantomOfCase,
+  type CalcOptions,
+  type CaseParts,
+} from './calculateCase';
+import { calculatePlan } from './calculatePlan';
+import type { CalcRequest, Problem } from './calcRequest';
+import {
+  monteCarloCalibration,
+  monteCarloRunOptions,
+  type McCalibration,
+} from './monteCarloCalibration';
+import { monteCarloRunKey } from './monteCarloRunKey';
+import {
+  PREVIEW_DEPTH_STEP_CM,
+  PREVIEW_ETAR_KNOT_STEP_CM,
+  PREVIEW_METHOD_IDS,
+} from './previewReport';
+import { resolveWater, waterKeyOf, type WaterSourceSpec } from './waterSource';
+import type { McOptions } from '../engine/montecarlo/monteCarloPlan';
+import { validateCase } from '../io/caseFile';
+import type { LaminaCase } from '../io/caseSchema';
+import { validatePlan } from '../io/planFile';
+import { PLAN_FORMAT } from '../io/planSchema';
+import type { CalcReport, PlanReport } from '../contract/reports';
+
+/** Curve resolution of a full calculation (cm). */
+export const FULL_DEPTH_STEP_CM = 0.05;
+
+type Failure = { ok: false; problems: Problem[] };
+export type CaseAnswer = { ok: true; report: CalcReport } | Failure;
+export type PlanAnswer = { ok: true; report: PlanReport; isPlan: boolean } | Failure;
+export interface McSetup {
+  ok: true;
+  /** The key the run's result is merged under (monteCarloRunKey). */
+  key: string;
+  options: McOptions;
+  calibration: McCalibration;
+  /** Depth grid of the full report, so the run's curve lines up with the other methods. */
+  depthGridCm: number[];
+}
+export type McSetupAnswer = McSetup | Failure;
+
+type CaseRequest = Extract<CalcRequest, { purpose: 'preview' | 'full' }>;
+type PlanRequest = Extract<CalcRequest, { purpose: 'plan' }>;
+type McRequest = Extract<CalcRequest, { purpose: 'monte-carlo' }>;
+
+/** Recent deterministic parts of full calculations, by case, water data and options. */
+const PARTS_ENTRIES = 12;
+const partsCache = new Map<string, CaseParts>();
+
+function cachedParts(water: WaterSourceSpec) {
+  return (c: LaminaCase, options: CalcOptions): CaseParts => {
+    const key = JSON.stringify([
+      waterKeyOf(c, water),
+      options.methods ?? null,
+      options.depthStepCm ?? null,
+      options.typeA ?? null,
+      c,
+    ]);
+    const hit = partsCache.get(key);
+    if (hit) {
+      partsCache.delete(key);
+      partsCache.set(key, hit);
+      return hit;
+    }
+    const parts = computeCaseParts(c, options);
+    if (partsCache.size >= PARTS_ENTRIES)
+      partsCache.delete(partsCache.keys().next().value as string);
+    partsCache.set(key, parts);
+    return parts;
+  };
+}
+
+function waterProblems(c: LaminaCase, water: WaterSourceSpec): Failure | null {
+  const r = resolveWater(c, water);
+  return r.ok
+    ? null
+    : { ok: false, problems: r.problems.map((message) => ({ path: 'waterTable', message })) };
+}
+
+/** A case: the preview (fast methods, coarse grid) or the full calculation. */
+export function calculateCaseRequest(req: CaseRequest): CaseAnswer {
+  const v = validateCase(req.case);
+  if (!v.ok) return v;
+  const c = v.value;
+  const bad = waterProblems(c, req.water);
+  if (bad) return bad;
+  const r = resolveWater(c, req.water) as { ok: true; waterData: CalcOptions['waterData'] };
+  const waterData = r.waterData ? { waterData: r.waterData } : {};
+  if (req.purpose === 'preview') {
+    const parts = computeCaseParts(c, {
+      ...waterData,
+      depthStepCm: PREVIEW_DEPTH_STEP_CM,
+      methods: PREVIEW_METHOD_IDS,
+      typeA: { etarKnotStepCm: PREVIEW_ETAR_KNOT_STEP_CM },
+    });
+    return { ok: true, report: assembleReport(parts, null) };
+  }
+  const { methods, typeA } = req.options ?? {};
+  const parts = cachedParts(req.water)(c, {
+    ...waterData,
+    depthStepCm: FULL_DEPTH_STEP_CM,
+    ...(methods ? { methods } : {}),
+    ...(typeA ? { typeA } : {}),
+  });
+  const run = req.mcRun;
+  const attached =
+    run && run.key === monteCarloRunKey(c, req.water) ? { run: run.run, note: run.note } : null;
+  return {
+    ok: true,
+    report: assembleReport(parts, attached ?? monteCarloBlock(parts, req.options?.mc)),
+  };
+}
+
+/** A plan (or a case as a one-beam plan) with its point check. */
+export function calculatePlanRequest(req: PlanRequest): PlanAnswer {
+  const v = validatePlan(req.plan);
+  if (!v.ok) return v;
+  for (const b of v.value.beams) {
+    const bad = waterProblems(b.case, req.water);
+    if (bad) return bad;
+  }
+  const isPlan =
+    typeof req.plan === 'object' &&
+    req.plan !== null &&
+    (req.plan as { format?: unknown }).format === PLAN_FORMAT;
+  const report = calculatePlan(v.value, {
+    ...req.options,
+    water: req.water,
+    depthStepCm: FULL_DEPTH_STEP_CM,
+    mcRun: req.mcRun ?? null,
+    partsOf: cachedParts(req.water),
+  });
+  return { ok: true, report, isPlan };
+}
+
+/** What the page's worker pool needs to start a Monte Carlo run of a case. */
+export function prepareMonteCarlo(req: McRequest): McSetupAnswer {
+  const v = validateCase(req.case);
+  if (!v.ok) return v;
+  const c = v.value;
+  const bad = waterProblems(c, req.water);
+  if (bad) return bad;
+  const r = resolveWater(c, req.water) as { ok: true; waterData: CalcOptions['waterData'] };
+  const calibration = monteCarloCalibration(c, r.waterData);
+  return {
+    ok: true,
+    key: monteCarloRunKey(c, req.water),
+    options: monteCarloRunOptions(calibration, req.run),
+    calibration,
+    depthGridCm: depthGridCm(phantomOfCase(c).totalThicknessCm, FULL_DEPTH_STEP_CM),
+  };
+}
