@@ -1,5 +1,7 @@
 // The page's one store: the case being edited (with its undo history), field drafts that do not
-// validate yet, view preferences and the latest calculation. Components select single fields.
+// validate yet, view preferences and the latest calculation, plus the slices of the point check,
+// the Monte Carlo run and its form (each with its actions module: src/ui/check/checkStore.ts,
+// src/state/monteCarloStore.ts, src/ui/montecarlo/mcRunner.ts). Components select single fields.
 import { create } from 'zustand';
 import type { CalcReport } from '../contract/reports';
 import type { CaseProblem } from '../io/caseFile';
@@ -7,6 +9,9 @@ import type { LaminaCase } from '../io/caseSchema';
 import { fromCaseFile, type EditorCase } from './editorCase';
 import { record, redo, seal, startHistory, undo, type History } from './history';
 import { PRESETS } from './presets';
+import { initialCheckState, type CheckState } from './slices/checkSlice';
+import { initialMcForm, type McForm } from './slices/mcFormSlice';
+import { initialMonteCarloState, type MonteCarloState } from './slices/monteCarloSlice';
 
 export type Normalisation = 'dosePerMu' | 'percentWaterDmax' | 'relativeToWater';
 export type Theme = 'auto' | 'light' | 'dark';
@@ -53,6 +58,10 @@ export interface AppState {
   calc: CalcState;
   notice: Notice | null;
   storageMessage: string | null;
+  /** Slices (src/state/slices). */
+  check: CheckState;
+  monteCarlo: MonteCarloState;
+  mcForm: McForm;
 }
 
 const defaultCase = (): LaminaCase => (PRESETS[0] as (typeof PRESETS)[number]).make();
@@ -77,6 +86,9 @@ export const useAppStore = create<AppState>()(() => ({
   },
   notice: null,
   storageMessage: null,
+  check: initialCheckState(),
+  monteCarlo: initialMonteCarloState(),
+  mcForm: initialMcForm(),
 }));
 
 const set = useAppStore.setState;

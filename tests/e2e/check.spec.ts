@@ -19,8 +19,10 @@ async function openCheckWithWaterData(page: Page) {
   await expect(page.getByTestId('check-point-table')).toBeVisible();
 }
 
-/** The cells of the per-beam row for a point and method label. */
+/** The cells of the per-beam row for a point and method label, once the check is calculated. */
 async function rowCells(page: Page, pointId: string, methodLabel: string): Promise<string[]> {
+  // The check is calculated in the compute worker: wait for the one of the current inputs.
+  await expect(page.getByTestId('check-pending')).toHaveCount(0);
   const rows = page.getByTestId('check-point-table').locator('tbody tr');
   const all = await rows.evaluateAll((trs) =>
     trs.map((tr) => Array.from(tr.querySelectorAll('td')).map((td) => td.textContent ?? '')),

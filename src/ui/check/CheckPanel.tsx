@@ -93,11 +93,11 @@ function Settings({ methods }: { methods: { id: string; label: string }[] }) {
 }
 
 export function CheckPanel() {
-  usePlanCalculation();
+  const inputKey = usePlanCalculation();
   useEffect(() => {
     void openPlanFromAddress();
   }, []);
-  const view = useCheckView();
+  const view = useCheckView(inputKey);
   const figureRef = useRef<SVGSVGElement | null>(null);
   const first = view?.reports[0];
   const figure = useMemo(

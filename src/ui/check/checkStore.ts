@@ -1,53 +1,14 @@
-// The point check's own inputs, kept while the page is open (tab switches do not lose them):
-// the extra beams of a multi-beam plan with their calculations, the prescription, the
-// tolerances and the deciding method. Beam 1 is always the case in the editor.
-import { create } from 'zustand';
-import type { PlanReport } from '../../contract/reports';
-import { DEFAULT_TOLERANCES, type Tolerances } from '../../engine/check/tolerance';
-import type { CaseProblem } from '../../io/caseFile';
-import type { LaminaCase } from '../../io/caseSchema';
+// Actions on the point check's inputs (the check slice of the page's one store, kept while the
+// page is open: tab switches do not lose them). Beam 1 is always the case in the editor.
+import type { CheckState, ExtraBeam } from '../../state/slices/checkSlice';
+import { sliceOf } from '../../state/slice';
 import { toCaseFile } from '../../state/editorCase';
 import { replaceCase, setWaterSource, useAppStore } from '../../state/store';
 
-export interface ExtraBeam {
-  key: string;
-  id: string;
-  label: string;
-  weight: number;
-  case: LaminaCase;
-}
+export type { CheckState, ExtraBeam } from '../../state/slices/checkSlice';
 
-export interface CheckState {
-  /** Name of a plan opened from a file or link ('' = the editor's case name). */
-  planName: string;
-  firstBeam: { id: string; label: string; weight: number };
-  extraBeams: ExtraBeam[];
-  prescriptionPointId: string;
-  /** Total prescribed dose at the point (cGy), or null for none. */
-  prescriptionDoseCGy: number | null;
-  tolerances: Tolerances;
-  checkMethodId: string;
-  /** The worker's latest plan calculation (src/ui/check/useCheck.ts) and the input it is for. */
-  planReport: PlanReport | null;
-  planProblems: CaseProblem[];
-  planKey: string | null;
-  /** The input last asked for: while it differs from planKey a newer calculation is coming. */
-  wantedKey: string | null;
-}
-
-export const useCheckStore = create<CheckState>()(() => ({
-  planName: '',
-  firstBeam: { id: 'beam-1', label: '', weight: 1 },
-  extraBeams: [],
-  prescriptionPointId: '',
-  prescriptionDoseCGy: null,
-  tolerances: { ...DEFAULT_TOLERANCES },
-  checkMethodId: '',
-  planReport: null,
-  planProblems: [],
-  planKey: null,
-  wantedKey: null,
-}));
+/** The check slice of the page's one store. */
+export const useCheckStore = sliceOf(useAppStore, 'check');
 
 const set = useCheckStore.setState;
 const get = useCheckStore.getState;

@@ -80,9 +80,10 @@ interface PlanInput {
 
 /**
  * Keep the plan calculated in the compute worker whenever the editor's case, the check inputs,
- * the water source or the page's Monte Carlo run change (latest wins).
+ * the water source or the page's Monte Carlo run change (latest wins). Returns the key of the
+ * current input: a shown result with another key is pending.
  */
-export function usePlanCalculation(): void {
+export function usePlanCalculation(): string {
   const present = useAppStore((s) => s.history.present);
   const water = useAppStore((s) => s.waterSource);
   const mcResult = useMonteCarloStore((s) => s.result);
@@ -178,11 +179,15 @@ export function usePlanCalculation(): void {
       }),
     [runner, input],
   );
+  return input.key;
 }
 const keys = new Map<number, string>();
 
-/** The check view: the worker's last plan report with the plan it was calculated for. */
-export function useCheckView(): CheckView | null {
+/**
+ * The check view: the worker's last plan report with the plan it was calculated for; pending
+ * from the render that changed the input (`inputKey`) until its result arrives.
+ */
+export function useCheckView(inputKey: string): CheckView | null {
   const present = useAppStore((s) => s.history.present);
   const s = useCheckStore();
   return useMemo(() => {
@@ -200,9 +205,9 @@ export function useCheckView(): CheckView | null {
       plan,
       result,
       reports,
-      pending: s.planKey !== s.wantedKey,
+      pending: s.planKey !== inputKey,
       check: result.check,
       isPlan: plan.beams.length > 1,
     };
-  }, [present, s]);
+  }, [present, s, inputKey]);
 }

@@ -1,34 +1,18 @@
 // Starts and cancels the page's Monte Carlo run on the worker pool and keeps the run store
 // (src/state/monteCarloStore.ts) up to date: progress and the partial result after every batch,
 // the final (or, after Cancel, the merged-so-far) result at the end. One run at a time.
-import { create } from 'zustand';
+import { sliceOf } from '../../state/slice';
+import { useAppStore } from '../../state/store';
+import type { McForm } from '../../state/slices/mcFormSlice';
 import { startMonteCarlo, type McPoolOptions, type McRunHandle } from '../../compute/mcPool';
 import { setMonteCarlo, useMonteCarloStore } from '../../state/monteCarloStore';
 import type { LaminaCase } from '../../io/caseSchema';
-import type { McCalibration } from '../../compute/monteCarloCalibration';
 import type { McSetup } from '../../compute/calculationService';
 
-/** The form of the panel (kept when switching views) and what the current run was started with. */
-export interface McForm {
-  historiesText: string;
-  seedText: string;
-  doseToWater: boolean;
-  /** Settings of the run in the store (null before any run). */
-  run: {
-    histories: number;
-    seed: number;
-    doseToWater: boolean;
-    calibration: McCalibration;
-    startedAtMs: number;
-  } | null;
-}
+export type { McForm } from '../../state/slices/mcFormSlice';
 
-export const useMcForm = create<McForm>()(() => ({
-  historiesText: '200000',
-  seedText: '1',
-  doseToWater: false,
-  run: null,
-}));
+/** The Monte Carlo form slice of the page's one store. */
+export const useMcForm = sliceOf(useAppStore, 'mcForm');
 
 export function patchMcForm(patch: Partial<McForm>): void {
   useMcForm.setState(patch);
