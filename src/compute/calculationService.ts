@@ -58,20 +58,31 @@ type McRequest = Extract<CalcRequest, { purpose: 'monte-carlo' }>;
 const PARTS_ENTRIES = 12;
 const partsCache = new Map<string, CaseParts>();
 
+/**
+ * What the deterministic results depend on: beam, layers (not their labels), point ids and
+ * depths, water data and options. The case name, notes and planning values do not change them,
+ * so an edit of those reuses the parts (assembled with the current case).
+ */
+function physicsKey(c: LaminaCase, water: WaterSourceSpec, options: CalcOptions): string {
+  return JSON.stringify([
+    waterKeyOf(c, water),
+    options.methods ?? null,
+    options.depthStepCm ?? null,
+    options.typeA ?? null,
+    c.beam,
+    c.layers.map((l) => [l.materialId, l.thicknessCm, l.densityGPerCm3 ?? null]),
+    c.points.map((p) => [p.id, p.depthCm]),
+  ]);
+}
+
 function cachedParts(water: WaterSourceSpec) {
   return (c: LaminaCase, options: CalcOptions): CaseParts => {
-    const key = JSON.stringify([
-      waterKeyOf(c, water),
-      options.methods ?? null,
-      options.depthStepCm ?? null,
-      options.typeA ?? null,
-      c,
-    ]);
+    const key = physicsKey(c, water, options);
     const hit = partsCache.get(key);
     if (hit) {
       partsCache.delete(key);
       partsCache.set(key, hit);
-      return hit;
+      return { ...hit, case: c };
     }
     const parts = computeCaseParts(c, options);
     if (partsCache.size >= PARTS_ENTRIES)

@@ -19,6 +19,10 @@ function WaterDataLine() {
   const used = useAppStore(
     (s) => s.calc.report?.methods.find((m) => m.methodClass === 'type A')?.waterData ?? null,
   );
+  // The modelled beam chosen although the case carries its own table: say so, it is not the default.
+  const overridden = useAppStore(
+    (s) => s.waterSource === 'modelled' && s.history.present.waterData !== undefined,
+  );
   const needs = useAppStore(
     (s) => s.calc.report?.unavailable.some((u) => u.reason === NEEDS_WATER_DATA) ?? false,
   );
@@ -28,6 +32,7 @@ function WaterDataLine() {
       {used ? (
         <span className="water-used" title={used}>
           {used.split(';')[0]}
+          {overridden ? ' — chosen instead of the case’s own table' : ''}
         </span>
       ) : needs ? (
         <span className="missing-text">no table loaded (type-A methods cannot run)</span>
