@@ -112,6 +112,8 @@ test('entering the planning dose and MU gives a verdict; print view and PDF reco
 test('a two-beam plan opened from a file shows the total, and travels through a link', async ({
   page,
 }, testInfo) => {
+  // A long journey: two page loads and every beam calculated in the worker after each change.
+  test.setTimeout(120_000);
   await page.getByRole('tab', { name: 'Point check & report' }).click();
   await page
     .getByTestId('check-open-plan')
