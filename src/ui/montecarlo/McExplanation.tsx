@@ -12,9 +12,11 @@ export function McExplanation() {
         </li>
         <li>
           Each run simulates three phantoms with the same seed: the case, water with the same set-up
-          (for CF = D_het / D_water) and a 10 × 10 cm², SSD 100 water calibration that turns dose
-          per photon into dose per MU (scaled by the reference dose rate and S_c of the water data
-          the page uses).
+          (for CF = D_het / D_water) and a 10 × 10 cm², SSD 100 water calibration. With the modelled
+          beam the calibration turns dose per photon into dose per MU (scaled by the modelled
+          reference dose rate and S_c); with a measured table the dose per MU is CF × the
+          table&apos;s water dose per MU at the same depth, so the Monte Carlo differs from the
+          other methods only by its heterogeneity physics.
         </li>
         <li>
           Does not model: the treatment head (no flattening filter, jaws or head scatter beyond the
