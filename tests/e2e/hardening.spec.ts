@@ -34,6 +34,8 @@ async function freshPage(page: Page, path = '/') {
 test('a compute worker killed mid-run is replaced: the page says so, Retry recovers', async ({
   page,
 }, testInfo) => {
+  // Three compute workers start cold in this journey (module load, kernels, first calculation).
+  test.setTimeout(120_000);
   await freshPage(page, '/?debug=1');
   expect(
     await page.evaluate(() => (window as DebugWindow).__laminaDebug?.computeWorkerStarts()),
@@ -52,7 +54,7 @@ test('a compute worker killed mid-run is replaced: the page says so, Retry recov
 
   await page.getByTestId('calc-retry').click();
   await expect(alert).toHaveCount(0);
-  await expect(page.getByTestId('calc-status')).toContainText('calculated in');
+  await expect(page.getByTestId('calc-status')).toContainText('calculated in', { timeout: 45_000 });
   expect(
     await page.evaluate(() => (window as DebugWindow).__laminaDebug?.computeWorkerStarts()),
   ).toBe(2);
@@ -60,7 +62,7 @@ test('a compute worker killed mid-run is replaced: the page says so, Retry recov
   // Killed while idle: the next edit simply starts a fresh worker.
   await page.evaluate(() => (window as DebugWindow).__laminaDebug?.killComputeWorker());
   await page.getByTestId('layer-1-thickness').fill('5');
-  await expect(page.getByTestId('calc-status')).toContainText('calculated in');
+  await expect(page.getByTestId('calc-status')).toContainText('calculated in', { timeout: 45_000 });
   await expect(page.getByRole('alert').filter({ hasText: 'The calculation failed' })).toHaveCount(
     0,
   );
