@@ -50,6 +50,7 @@ export function checkInputOf(
     id: beam.id,
     label: beam.label,
     weight: beam.weight,
+    planningMu: c.beam.planningMu,
     layers: report.layers,
     points: c.points,
     methods: report.methods.map((m) => ({

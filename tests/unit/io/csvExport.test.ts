@@ -84,8 +84,9 @@ describe('CSV exports', () => {
       id,
       label: id,
       weight: 1,
+      planningMu: 120,
       layers: [{ topCm: 0, bottomCm: 20, relativeElectronDensity: 1 }],
-      points: [{ id: 'P', depthCm: 10, planningMu: 120, planningDoseCGy: 100 }],
+      points: [{ id: 'P', depthCm: 10, planningDoseCGy: 100 }],
       methods: [{ id: 'water', label: 'water', points: [{ id: 'P', dosePerMuCGy: dpm }] }],
     });
     const check = checkPlan([beam('AP', 0.81), beam('PA', 0.79)], {
@@ -114,8 +115,9 @@ describe('CSV exports', () => {
       id,
       label: id,
       weight: 1,
+      planningMu: 120,
       layers: [{ topCm: 0, bottomCm: 20, relativeElectronDensity: 1 }],
-      points: [{ id: 'P', depthCm: 10, planningMu: 120, planningDoseCGy: 100 }],
+      points: [{ id: 'P', depthCm: 10, planningDoseCGy: 100 }],
       methods: [
         {
           id: 'monte-carlo',
