@@ -5,7 +5,7 @@ import { DEFAULT_TOLERANCES } from '../engine/check/tolerance';
 import { PLAN_FORMAT } from '../io/planSchema';
 import { validatePlan, type PlanParseResult } from '../io/planFile';
 import { monteCarloRecordLines } from '../io/report/monteCarloNote';
-import { formatCheck } from './formatCheck';
+import { checkStatements, formatCheck } from './formatCheck';
 import { formatReport } from './formatReport';
 
 export interface LoadedDocument {
@@ -33,8 +33,8 @@ export function loadDocument(text: string): LoadedDocument {
 }
 
 /**
- * Options from --methods, --tolerances H,X, --prescribe POINT=DOSE and --check-method ID; throws on
- * a malformed value.
+ * Options from --methods, --tolerances H,X, --prescribe POINT=DOSE, --check-method ID and
+ * --dose-to water|medium; throws on a malformed value.
  */
 export function planOptionsOf(flags: Map<string, string | true>): PlanCalcOptions {
   const options: PlanCalcOptions = {};
@@ -63,13 +63,23 @@ export function planOptionsOf(flags: Map<string, string | true>): PlanCalcOption
   }
   const method = flags.get('check-method');
   if (typeof method === 'string') options.checkMethodId = method;
+  const doseTo = flags.get('dose-to');
+  if (doseTo !== undefined) {
+    if (doseTo !== 'water' && doseTo !== 'medium')
+      throw new Error(`--dose-to must be "water" or "medium" (found ${JSON.stringify(doseTo)})`);
+    options.doseTo = doseTo;
+  }
   return options;
 }
 
-/** JSON output: a case keeps the "lamina.calc" document with a `check` section; a plan prints the plan report. */
+/**
+ * JSON output: a case keeps the "lamina.calc" document with a `check` section; a plan prints the
+ * plan report. The check carries its verdict, deciding method and spread in words as well.
+ */
 export function jsonOf(result: PlanReport, isPlan: boolean): unknown {
-  if (isPlan) return result;
-  return { ...(result.beams[0]?.report ?? {}), check: result.check };
+  const check = { ...result.check, statements: checkStatements(result.check) };
+  if (isPlan) return { ...result, check };
+  return { ...(result.beams[0]?.report ?? {}), check };
 }
 
 export function textOf(result: PlanReport, isPlan: boolean): string {

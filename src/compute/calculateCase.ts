@@ -16,6 +16,8 @@ import type { WaterData } from '../engine/beam/waterData';
 import { isTypeAMethodId, typeAForCase, type TypeAVariants } from './typeAForCase';
 import { MONTE_CARLO_METHOD_ID, monteCarloForCase, type McCalcOptions } from './monteCarloForCase';
 import { isTypeBMethodId, typeBForCase } from './typeBForCase';
+import { convertMethodDose } from '../engine/dose/doseConversion';
+import { DEFAULT_DOSE_QUANTITY, type DoseQuantity } from '../engine/dose/doseQuantity';
 
 export const CALC_FORMAT = 'lamina.calc';
 export const CALC_VERSION = 1;
@@ -31,6 +33,8 @@ export interface CalcOptions {
   typeA?: TypeAVariants;
   /** Monte Carlo histories and seed; the monte-carlo method runs only when given. */
   mc?: McCalcOptions;
+  /** Dose to water (default) or dose to medium, for every method. */
+  doseTo?: DoseQuantity;
 }
 
 export interface CalcReport {
@@ -66,6 +70,8 @@ export interface CalcReport {
   /** Equilibrium and validity warnings (src/engine/equilibrium), sorted by depth. */
   warnings: Warning[];
   cautions: string[];
+  /** The dose convention of every method's dose (each method's `dose` says how it got there). */
+  doseTo: DoseQuantity;
 }
 
 export const CAUTIONS: readonly string[] = [
@@ -93,9 +99,14 @@ export function calculateCase(c: LaminaCase, options: CalcOptions = {}): CalcRep
   const step = options.depthStepCm ?? 0.05;
   const grid = depthGridCm(phantom.totalThicknessCm, step);
   const requested = options.methods ?? [];
+  const doseTo = options.doseTo ?? DEFAULT_DOSE_QUANTITY;
   const typeA = typeAForCase(c, phantom, grid, options.methods, options.waterData, options.typeA);
-  const mc = monteCarloForCase(c, grid, options.methods, options.mc, typeA.waterData);
+  const mc = monteCarloForCase(c, grid, options.methods, options.mc, typeA.waterData, doseTo);
   const typeB = typeBForCase(c, phantom, grid, options.methods);
+  // One dose convention for every method (the Monte Carlo converts its own result the same way).
+  const converted = [...typeA.methods, ...typeB].map((m) =>
+    convertMethodDose(m, doseTo, phantom, c.beam.energy),
+  );
   const unavailable = [
     ...typeA.unavailable,
     ...mc.unavailable,
@@ -104,7 +115,7 @@ export function calculateCase(c: LaminaCase, options: CalcOptions = {}): CalcRep
       .filter((id) => !isTypeAMethodId(id) && !isTypeBMethodId(id))
       .map((id) => ({ id, reason: `unknown method id "${id}"` })),
   ];
-  const methods = [...typeA.methods, ...typeB, ...mc.methods];
+  const methods = [...converted, ...mc.methods];
   const warnings = caseWarnings(c, phantom, methods, typeA.waterData);
   return {
     format: CALC_FORMAT,
@@ -147,5 +158,6 @@ export function calculateCase(c: LaminaCase, options: CalcOptions = {}): CalcRep
     unavailable,
     warnings,
     cautions: [...CAUTIONS],
+    doseTo,
   };
 }

@@ -13,6 +13,7 @@ import {
 } from '../engine/check/planCheck';
 import { DEFAULT_TOLERANCES, type Tolerances } from '../engine/check/tolerance';
 import type { LaminaPlan } from '../io/planFile';
+import { DEFAULT_DOSE_QUANTITY } from '../engine/dose/doseQuantity';
 
 export interface PlanCalcOptions extends CalcOptions {
   /** Overrides the plan's tolerances (e.g. edited on the page). */
@@ -87,7 +88,9 @@ export function waterChainsOf(
 }
 
 export function calculatePlan(plan: LaminaPlan, options: PlanCalcOptions = {}): PlanReport {
-  const { tolerances, checkMethodId, prescription, ...calcOptions } = options;
+  const { tolerances, checkMethodId, prescription, ...rest } = options;
+  // The dose convention: the caller's (--dose-to, the page), else the plan file's, else water.
+  const calcOptions = { ...rest, doseTo: rest.doseTo ?? plan.doseTo ?? DEFAULT_DOSE_QUANTITY };
   const beams = plan.beams.map((b) => ({
     id: b.id,
     label: b.label || b.case.name || b.id,
@@ -103,6 +106,7 @@ export function calculatePlan(plan: LaminaPlan, options: PlanCalcOptions = {}): 
       tolerances: tolerances ?? plan.tolerances ?? DEFAULT_TOLERANCES,
       prescription: prescription ?? plan.prescription,
       decisiveMethodId: checkMethodId ?? plan.checkMethodId,
+      doseTo: calcOptions.doseTo,
     },
   );
   return { format: 'lamina.plancalc', version: 1, planName: plan.name, beams, check };

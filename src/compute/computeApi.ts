@@ -29,7 +29,7 @@ export interface WorkerCalcOptions extends Omit<CalcOptions, 'waterData' | 'type
   waterSource?: 'case' | 'modelled';
   typeA?: Pick<
     TypeAVariants,
-    'bathoTable' | 'etarRhoTilde' | 'etarScatterLengthCm' | 'doseToMedium' | 'etarKnotStepCm'
+    'bathoTable' | 'etarRhoTilde' | 'etarScatterLengthCm' | 'etarKnotStepCm'
   >;
 }
 

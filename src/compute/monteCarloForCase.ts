@@ -7,6 +7,7 @@ import type { WaterData } from '../engine/beam/waterData';
 import type { MethodResult } from '../engine/methodResult';
 import { runMonteCarlo } from '../engine/montecarlo/runMonteCarlo';
 import type { LaminaCase } from '../io/caseSchema';
+import type { DoseQuantity } from '../engine/dose/doseQuantity';
 
 export const MONTE_CARLO_METHOD_ID = 'monte-carlo';
 
@@ -21,6 +22,7 @@ export function monteCarloForCase(
   requested: readonly string[] | undefined,
   mc: McCalcOptions | undefined,
   waterData?: WaterData,
+  doseTo?: DoseQuantity,
 ): { methods: MethodResult[]; unavailable: { id: string; reason: string }[] } {
   const asked = requested ? requested.includes(MONTE_CARLO_METHOD_ID) : true;
   if (!asked) return { methods: [], unavailable: [] };
@@ -37,6 +39,7 @@ export function monteCarloForCase(
     {
       histories: mc.histories,
       seed: mc.seed,
+      ...(doseTo ? { doseTo } : {}),
       // The calibration maximum is fitted around the modelled beam's d_max (same kernels and
       // spectrum as the Monte Carlo), whatever water data the other methods use.
       referenceDMaxCm: modelledWaterData(c.beam.energy).dMaxCm,

@@ -7,6 +7,7 @@ import type { LaminaCase } from '../io/caseSchema';
 import { fromCaseFile, type EditorCase } from './editorCase';
 import { record, redo, seal, startHistory, undo, type History } from './history';
 import { PRESETS } from './presets';
+import { DEFAULT_DOSE_QUANTITY, type DoseQuantity } from '../engine/dose/doseQuantity';
 
 export type Normalisation = 'dosePerMu' | 'percentWaterDmax' | 'relativeToWater';
 export type Theme = 'auto' | 'light' | 'dark';
@@ -45,6 +46,8 @@ export interface AppState {
   hiddenWarningMethods: string[];
   theme: Theme;
   waterSource: WaterSource;
+  /** Dose to water or to medium for every method on the page (one choice, page-wide). */
+  doseTo: DoseQuantity;
   tab: ViewTab;
   calc: CalcState;
   notice: Notice | null;
@@ -61,6 +64,7 @@ export const useAppStore = create<AppState>()(() => ({
   hiddenWarningMethods: [],
   theme: 'auto',
   waterSource: 'modelled',
+  doseTo: DEFAULT_DOSE_QUANTITY,
   tab: 'dose',
   calc: {
     status: 'idle',
@@ -134,6 +138,10 @@ export function setTheme(theme: Theme): void {
 
 export function setWaterSource(waterSource: WaterSource): void {
   set({ waterSource });
+}
+
+export function setDoseTo(doseTo: DoseQuantity): void {
+  set({ doseTo });
 }
 
 export function setTab(tab: ViewTab): void {

@@ -24,6 +24,7 @@ import {
 import type { LaminaCase } from '../io/caseSchema';
 import type { ComputeApi } from '../compute/computeApi';
 import type { CalcReport } from '../compute/calculateCase';
+import type { DoseQuantity } from '../engine/dose/doseQuantity';
 import {
   mergePreviewReport,
   PREVIEW_DEPTH_STEP_CM,
@@ -38,6 +39,7 @@ interface CalcInput {
   seq: number;
   raw: LaminaCase;
   waterSource: WaterSource;
+  doseTo: DoseQuantity;
   depthStepCm: number;
   methods?: readonly string[];
   /** Preview only: ETAR kernel weights exact at knots this far apart, interpolated between. */
@@ -76,19 +78,21 @@ const PREVIEW_OPTIONS = {
 const PREVIEW_CACHE_ENTRIES = 120;
 
 /** The exact input a preview was computed for: the case file and the water data chosen. */
-function previewKey(raw: LaminaCase, waterSource: WaterSource): string {
-  return `${waterSource}|${JSON.stringify(raw)}`;
+function previewKey(raw: LaminaCase, waterSource: WaterSource, doseTo: DoseQuantity): string {
+  return `${waterSource}|${doseTo}|${JSON.stringify(raw)}`;
 }
 
 /** The worker's calculate options for an input. */
 function optionsOf({
   waterSource,
+  doseTo,
   depthStepCm,
   methods,
   etarKnotStepCm,
 }: Omit<CalcInput, 'seq' | 'raw'>) {
   return {
     waterSource: waterSource === 'modelled' ? ('modelled' as const) : ('case' as const),
+    doseTo,
     depthStepCm,
     ...(methods ? { methods: [...methods] } : {}),
     ...(etarKnotStepCm !== undefined ? { typeA: { etarKnotStepCm } } : {}),
@@ -214,12 +218,12 @@ export function useCompute(): void {
       for (const candidate of boundaryCandidates(doc, k, around)) {
         if (id !== sweep) return;
         const raw = toCaseFile(candidate);
-        const key = previewKey(raw, s.waterSource);
+        const key = previewKey(raw, s.waterSource, s.doseTo);
         if (cache.has(key)) continue;
         try {
           const answer = await getPreviewWorker().calculate(
             raw,
-            optionsOf({ waterSource: s.waterSource, ...PREVIEW_OPTIONS }),
+            optionsOf({ waterSource: s.waterSource, doseTo: s.doseTo, ...PREVIEW_OPTIONS }),
           );
           if (answer.ok) {
             cache.set(key, answer.report);
@@ -248,9 +252,14 @@ export function useCompute(): void {
 
     const ask = (s: AppState, wants: { full: boolean; preview: boolean }) => {
       seq += 1;
-      const base = { seq, raw: toCaseFile(s.history.present), waterSource: s.waterSource };
+      const base = {
+        seq,
+        raw: toCaseFile(s.history.present),
+        waterSource: s.waterSource,
+        doseTo: s.doseTo,
+      };
       if (wants.preview) {
-        const key = previewKey(base.raw, base.waterSource);
+        const key = previewKey(base.raw, base.waterSource, base.doseTo);
         const ready = lastFull ? cache.get(key) : undefined;
         if (ready && lastFull && gate.preview(seq)) {
           speculationStats.hits += 1;
@@ -267,7 +276,11 @@ export function useCompute(): void {
     ask(useAppStore.getState(), { full: true, preview: false });
     let settle: ReturnType<typeof setTimeout> | undefined;
     const unsubscribe = useAppStore.subscribe((s, prev) => {
-      if (s.history.present !== prev.history.present || s.waterSource !== prev.waterSource) {
+      if (
+        s.history.present !== prev.history.present ||
+        s.waterSource !== prev.waterSource ||
+        s.doseTo !== prev.doseTo
+      ) {
         clearTimeout(settle);
         ask(s, { full: !dragging(s), preview: true });
         followSweep(s);

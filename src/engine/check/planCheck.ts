@@ -15,6 +15,7 @@ import { isHeterogeneousPath, type PathLayer } from './heterogeneousPath';
 import { decidingMethodOf, type DecidingReason } from './decidingMethod';
 import { decidingDifferenceOf, type DecidingDifference } from './decidingDifference';
 import { methodSpreadOf, type MethodSpread } from './methodSpread';
+import type { DoseQuantity } from '../dose/doseQuantity';
 import {
   percentDifference,
   toleranceFor,
@@ -64,6 +65,8 @@ export interface CheckOptions {
   prescription?: Prescription | undefined;
   /** Method whose verdict decides the plan's verdict; the default for the path when absent. */
   decisiveMethodId?: string | undefined;
+  /** The dose convention of the methods' doses (printed with the check). */
+  doseTo?: DoseQuantity | undefined;
 }
 
 /** A number a comparison needs and does not have. */
@@ -146,6 +149,8 @@ export interface TotalPointCheck {
 
 export interface PlanCheck {
   tolerances: Tolerances;
+  /** The dose convention of every dose in the check (null when the caller did not say). */
+  doseTo: DoseQuantity | null;
   prescription: Prescription | null;
   methods: { id: string; label: string }[];
   decisiveMethodId: string | null;
@@ -358,6 +363,7 @@ export function checkPlan(beams: readonly CheckBeamInput[], options: CheckOption
   const decisiveMethodId = deciding.id;
   const partial = {
     tolerances: { ...options.tolerances },
+    doseTo: options.doseTo ?? null,
     prescription: options.prescription ?? null,
     methods,
     decisiveMethodId,

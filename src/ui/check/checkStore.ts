@@ -17,7 +17,7 @@ export interface ExtraBeam {
   case: LaminaCase;
   /** Latest calculation of this beam (null while running). */
   report: CalcReport | null;
-  /** The page's water-data choice the report was calculated with. */
+  /** The page's water-data choice and dose convention the report was calculated with. */
   reportSource?: string | undefined;
   problems: CaseProblem[];
 }

@@ -47,6 +47,7 @@ export function planOf(first: LaminaCase, s: CheckState): LaminaPlan {
   if (s.prescriptionDoseCGy !== null && s.prescriptionPointId)
     plan.prescription = { pointId: s.prescriptionPointId, doseCGy: s.prescriptionDoseCGy };
   if (s.checkMethodId) plan.checkMethodId = s.checkMethodId;
+  plan.doseTo = useAppStore.getState().doseTo;
   return plan;
 }
 
@@ -57,16 +58,22 @@ export function planOf(first: LaminaCase, s: CheckState): LaminaPlan {
 export function useExtraBeamCalculations(): void {
   const extra = useCheckStore((s) => s.extraBeams);
   const source = useAppStore((s) => s.waterSource);
+  const doseTo = useAppStore((s) => s.doseTo);
   useEffect(() => {
+    const key = `${source}|${doseTo}`;
+    const current = () => {
+      const a = useAppStore.getState();
+      return `${a.waterSource}|${a.doseTo}` === key;
+    };
     for (const b of extra) {
-      if ((b.report && b.reportSource === source) || b.problems.length > 0) continue;
+      if ((b.report && b.reportSource === key) || b.problems.length > 0) continue;
       const target = b.case;
       void getComputeWorker()
-        .calculate(target, { waterSource: source === 'modelled' ? 'modelled' : 'case' })
+        .calculate(target, { waterSource: source === 'modelled' ? 'modelled' : 'case', doseTo })
         .then((r) => {
           const now = useCheckStore.getState().extraBeams.find((x) => x.key === b.key);
-          if (!now || now.case !== target || useAppStore.getState().waterSource !== source) return;
-          if (r.ok) patchExtraBeam(b.key, { report: r.report, reportSource: source, problems: [] });
+          if (!now || now.case !== target || !current()) return;
+          if (r.ok) patchExtraBeam(b.key, { report: r.report, reportSource: key, problems: [] });
           else patchExtraBeam(b.key, { problems: r.problems });
         })
         // The worker was lost (it is replaced on the next call): say so; Retry calculates again.
@@ -75,7 +82,7 @@ export function useExtraBeamCalculations(): void {
           patchExtraBeam(b.key, { problems: [{ path: WORKER_PROBLEM_PATH, message }] });
         });
     }
-  }, [extra, source]);
+  }, [extra, source, doseTo]);
   useEffect(
     () =>
       onRecalcRequest(() => {
@@ -99,6 +106,7 @@ export function useCheckView(): CheckView | null {
   const present = useAppStore((s) => s.history.present);
   const report = useShownReport();
   const s = useCheckStore();
+  const doseTo = useAppStore((a) => a.doseTo);
   return useMemo(() => {
     if (!report) return null;
     const first = toCaseFile(present);
@@ -123,10 +131,11 @@ export function useCheckView(): CheckView | null {
         tolerances: s.tolerances,
         prescription: plan.prescription,
         decisiveMethodId: s.checkMethodId || undefined,
+        doseTo,
       },
     );
-    return { plan, reports, pending, check };
-  }, [present, report, s]);
+    return { plan: { ...plan, doseTo }, reports, pending, check };
+  }, [present, report, s, doseTo]);
 }
 
 /**

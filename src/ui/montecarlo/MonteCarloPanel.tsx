@@ -6,6 +6,7 @@ import { validateCase } from '../../io/caseFile';
 import { toCaseFile, totalThicknessCm } from '../../state/editorCase';
 import { useMonteCarloStore, type McRunStatus } from '../../state/monteCarloStore';
 import { useAppStore } from '../../state/store';
+import { doseQuantityLabel } from '../../engine/dose/doseQuantity';
 import { McExplanation } from './McExplanation';
 import { McProgressView } from './McProgressView';
 import { McRunForm } from './McRunForm';
@@ -41,7 +42,7 @@ export function MonteCarloPanel() {
     ? null
     : `The case cannot be run as it stands: ${valid.problems.map((p) => `${p.path}: ${p.message}`).join('; ')}`;
 
-  const onStart = (histories: number, seed: number, doseToWater: boolean) => {
+  const onStart = (histories: number, seed: number) => {
     if (!valid.ok) return;
     const waterSource = (useAppStore.getState() as { waterSource?: string }).waterSource;
     startRun({
@@ -49,7 +50,7 @@ export function MonteCarloPanel() {
       caseKey: currentKey,
       histories,
       seed,
-      doseToWater,
+      doseTo: useAppStore.getState().doseTo,
       waterSource,
       depthGridCm: gridFor(reportGrid, totalThicknessCm(present)),
     });
@@ -71,16 +72,16 @@ export function MonteCarloPanel() {
         ) : null}
         {stale ? (
           <span className="mc-stale" data-testid="mc-stale">
-            stale (case changed): this run is not drawn in the depth-dose and CF views; start a new
-            run for the current case.
+            stale (case, water data or dose convention changed): this run is not drawn in the
+            depth-dose and CF views; start a new run for the current case.
           </span>
         ) : null}
       </div>
       {run ? (
         <p className="hint" data-testid="mc-run-settings">
           Run: {groupDigits(run.histories)} histories per run, seed {run.seed},{' '}
-          {run.doseToWater ? 'dose to water' : 'dose to medium'}; dose per MU from the calibration
-          run × {run.calibration.referenceDosePerMuCGy} cGy/MU × S_c{' '}
+          {doseQuantityLabel(run.doseTo)}; dose per MU from the calibration run ×{' '}
+          {run.calibration.referenceDosePerMuCGy} cGy/MU × S_c{' '}
           {run.calibration.collimatorScatterFactor.toFixed(3)} ({run.calibration.source}).
         </p>
       ) : null}

@@ -1,6 +1,7 @@
 // Pure helpers of the page's Monte Carlo run: which case a run belongs to (its key), the typed
 // histories and seed checked with a message, and the wording of progress and uncertainty.
 import type { EditorCase } from '../../state/editorCase';
+import { DEFAULT_DOSE_QUANTITY, type DoseQuantity } from '../../engine/dose/doseQuantity';
 
 /** Histories per scenario offered as presets (case, water and calibration runs each get these). */
 export const HISTORY_PRESETS: readonly { histories: number; label: string }[] = [
@@ -52,16 +53,23 @@ export function groupDigits(n: number): string {
 
 /**
  * The key a run is tied to: what the Monte Carlo result depends on (beam, layers, points, water
- * data and which water data the page uses for the dose-per-MU calibration). The case name,
- * notes and layer labels do not change the result, so editing them does not make a run stale.
+ * data, which water data the page uses for the dose-per-MU calibration, and the dose convention).
+ * The case name, notes, layer labels and the planning values do not change the result, so
+ * editing them does not make a run stale.
  */
-export function monteCarloCaseKey(c: EditorCase, waterSource: string | undefined): string {
+export function monteCarloCaseKey(
+  c: EditorCase,
+  waterSource: string | undefined,
+  doseTo: DoseQuantity = DEFAULT_DOSE_QUANTITY,
+): string {
+  const { energy, setup, fieldXCm, fieldYCm } = c.beam;
   return JSON.stringify({
-    beam: c.beam,
+    beam: { energy, setup, fieldXCm, fieldYCm },
     layers: c.layers.map((l) => [l.materialId, l.thicknessCm, l.densityGPerCm3 ?? null]),
     points: c.points.map((p) => [p.id, p.depthCm]),
     waterData: waterSource === 'modelled' ? null : (c.waterData ?? null),
     waterSource: waterSource ?? null,
+    doseTo,
   });
 }
 

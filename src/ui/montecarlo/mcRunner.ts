@@ -5,18 +5,18 @@ import { create } from 'zustand';
 import { startMonteCarlo, type McPoolOptions, type McRunHandle } from '../../compute/mcPool';
 import { setMonteCarlo, useMonteCarloStore } from '../../state/monteCarloStore';
 import type { LaminaCase } from '../../io/caseSchema';
+import type { DoseQuantity } from '../../engine/dose/doseQuantity';
 import { monteCarloCalibration, type McCalibration } from './mcCalibration';
 
 /** The form of the panel (kept when switching views) and what the current run was started with. */
 export interface McForm {
   historiesText: string;
   seedText: string;
-  doseToWater: boolean;
   /** Settings of the run in the store (null before any run). */
   run: {
     histories: number;
     seed: number;
-    doseToWater: boolean;
+    doseTo: DoseQuantity;
     calibration: McCalibration;
     startedAtMs: number;
   } | null;
@@ -25,7 +25,6 @@ export interface McForm {
 export const useMcForm = create<McForm>()(() => ({
   historiesText: '200000',
   seedText: '1',
-  doseToWater: false,
   run: null,
 }));
 
@@ -41,7 +40,8 @@ export interface StartRequest {
   caseKey: string;
   histories: number;
   seed: number;
-  doseToWater: boolean;
+  /** The page's dose convention (scored as dose to medium, converted when water is chosen). */
+  doseTo: DoseQuantity;
   waterSource?: string | undefined;
   /** The report's depth grid, so the MC curve lines up with the other methods. */
   depthGridCm: readonly number[];
@@ -57,7 +57,7 @@ export function startRun(req: StartRequest): void {
     run: {
       histories: req.histories,
       seed: req.seed,
-      doseToWater: req.doseToWater,
+      doseTo: req.doseTo,
       calibration,
       startedAtMs: Date.now(),
     },
@@ -76,7 +76,7 @@ export function startRun(req: StartRequest): void {
       {
         histories: req.histories,
         seed: req.seed,
-        doseToWater: req.doseToWater,
+        doseTo: req.doseTo,
         referenceDosePerMuCGy: calibration.referenceDosePerMuCGy,
         collimatorScatterFactor: calibration.collimatorScatterFactor,
         referenceDMaxCm: calibration.referenceDMaxCm,

@@ -11,7 +11,11 @@ import { isRunCurrent, monteCarloCaseKey } from './mcRunModel';
 export function useCurrentMcCaseKey(): string {
   const present = useAppStore((s) => s.history.present);
   const waterSource = useAppStore((s) => (s as { waterSource?: string }).waterSource);
-  return useMemo(() => monteCarloCaseKey(present, waterSource), [present, waterSource]);
+  const doseTo = useAppStore((s) => s.doseTo);
+  return useMemo(
+    () => monteCarloCaseKey(present, waterSource, doseTo),
+    [present, waterSource, doseTo],
+  );
 }
 
 export function useShownReport(): CalcReport | null {

@@ -48,12 +48,14 @@ describe('CSV exports', () => {
       'radiological_depth_cm',
       'synthetic_dose_per_mu_cgy',
       'synthetic_cf',
+      'dose_to',
     ]);
     expect(back.data).toHaveLength(report.depthCm.length);
     back.data.forEach((row, i) => {
       expect(row.depth_cm).toBe(report.depthCm[i]);
       expect(row.radiological_depth_cm).toBe(report.radiologicalDepthCm[i]);
       expect(row.synthetic_dose_per_mu_cgy).toBe(m.curve.dosePerMuCGy[i]);
+      expect(row.dose_to).toBe('water');
     });
   });
 

@@ -52,7 +52,7 @@ const request = (caseKey: string, histories: number, delayMs = 0) => ({
   caseKey,
   histories,
   seed: 7,
-  doseToWater: false,
+  doseTo: 'medium' as const,
   waterSource: 'modelled',
   depthGridCm: REPORT.depthCm,
   pool: { workers: 2, createWorker: () => localWorker(delayMs) },
