@@ -4,6 +4,7 @@
 // entry from a newer Lamina, or one that no longer reads, is reported as unreadable (never guessed
 // at), so the caller can keep it under a backup key.
 import { validateCase, describeProblems } from '../io/caseFile';
+import { migrateCase } from '../io/caseMigrations';
 import {
   beamSchema,
   CASE_FORMAT,
@@ -102,8 +103,10 @@ export function readAutosaveEntry(text: string | null): AutosaveRead {
  * valid on its own. The calculation then lists the remaining problems.
  */
 export function lenientCase(raw: unknown): LaminaCase | null {
-  if (typeof raw !== 'object' || raw === null) return null;
-  const d = raw as Record<string, unknown>;
+  // Older case versions are lifted first (a refused migration leaves the entry unreadable).
+  const migrated = migrateCase(raw);
+  if (!migrated.ok) return null;
+  const d = migrated.value as Record<string, unknown>;
   if (d.format !== CASE_FORMAT || d.version !== CASE_VERSION) return null;
   const beam = beamSchema.safeParse(d.beam);
   const layers = Array.isArray(d.layers) ? d.layers.map((l) => layerSchema.safeParse(l)) : [];

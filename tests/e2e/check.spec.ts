@@ -64,7 +64,7 @@ test('entering the planning dose and MU gives a verdict; print view and PDF reco
   await page.getByTestId('plan-mu-beam-1').fill((checkMu * 1.1).toFixed(1));
   await expect(page.getByTestId('check-verdict')).toContainText('Outside tolerance');
   await expect(page.getByTestId('check-verdict-statement')).toHaveText(
-    /^fail — Ratio of TMR \(effective depth\): (ΔMU −9\.\d\d|Δdose \+10\.\d\d) % beyond ±5 % \(beam beam-1, point P1\)$/,
+    /^fail — Ratio of TMR \(effective depth\): (ΔMU −9\.\d\d|Δdose \+(9\.9\d|10\.\d\d)) % beyond ±5 % \(beam beam-1, point P1\)$/,
   );
   expect((await rowCells(page, 'P1', rtmr))[12]).toBe('FAIL');
 
@@ -96,8 +96,9 @@ test('entering the planning dose and MU gives a verdict; print view and PDF reco
   // The factor chain of the water data the page used (the modelled beam by default).
   expect(pdfLines.some((l) => l.startsWith('Water chain at P1: D/MU = '))).toBe(true);
   expect(pdfLines).toContain((checkMu * 1.1).toFixed(1));
-  // Greek letters printed as written (embedded font), and the verdict in words.
-  expect(pdfLines.some((l) => l.includes('Verdict: fail — Ratio of TMR'))).toBe(true);
+  // Greek letters printed as written (embedded font), and the verdict in words (the 12 %
+  // tolerance set above makes it a pass).
+  expect(pdfLines.some((l) => l.includes('Verdict: pass — Ratio of TMR'))).toBe(true);
   expect(pdfLines.some((l) => l.includes('ΔMU'))).toBe(true);
 
   // The figure as SVG and PNG files.
