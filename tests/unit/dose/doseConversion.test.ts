@@ -86,3 +86,29 @@ describe('convertMethodDose through calculateCase', () => {
     expect(calculateCase(c, { ...opts, methods: ['rtmr'] }).doseTo).toBe('water');
   });
 });
+
+describe('the dose planes follow the same convention', () => {
+  it('typeBDosePlane(...) rows in bone scale by s_water,medium, rows in water not at all', async () => {
+    const { typeBDosePlane } = await import('../../../src/engine/superposition/typeBMethods');
+    const { makeSlabPhantom } = await import('../../../src/engine/phantom/slabPhantom');
+    const phantom = makeSlabPhantom([
+      { materialId: 'water', thicknessCm: 3 },
+      { materialId: 'corticalBone', thicknessCm: 2 },
+      { materialId: 'water', thicknessCm: 5 },
+    ]);
+    const beam = { ssdCm: 100, fieldXCm: 10, fieldYCm: 10 };
+    const o = { method: 'pencil-beam' as const, stepCm: 1, halfWidthCm: 2 };
+    const m = typeBDosePlane('6MV', phantom, beam, { ...o, doseTo: 'medium' });
+    const w = typeBDosePlane('6MV', phantom, beam, { ...o, doseTo: 'water' });
+    const row = (p: typeof m, depthCm: number) => p.dosePerMuCGy[p.depthCm.indexOf(depthCm)]!;
+    // Depth 4 cm lies in bone, 8 cm in water: one factor per row, exact arithmetic otherwise.
+    row(w, 4).forEach((v, i) =>
+      expectRelClose(
+        v / row(m, 4)[i]!,
+        stoppingPowerRatioWaterToMedium('corticalBone', spectrum),
+        1e-12,
+      ),
+    );
+    expect(row(w, 8)).toEqual(row(m, 8));
+  });
+});
