@@ -24,7 +24,7 @@ const NOTE = 'Invented scenario and invented planning-system values (demo only).
 function caseDoc(name: string, beam: unknown, layers: Layer[], points: unknown[]): LaminaCase {
   const r = validateCase({
     format: 'lamina.case',
-    version: 1,
+    version: 2,
     name,
     notes: NOTE,
     beam,
@@ -41,20 +41,20 @@ function withPlanning(c: LaminaCase, doseCGy: number, offsetPercent: number): La
   const dpm = (id: string) =>
     calculatePlan({
       format: 'lamina.plan',
-      version: 1,
+      version: 2,
       name: '',
       beams: [{ id: 'b', weight: 1, case: c }],
     })
       .beams[0]?.report.methods.find((m) => m.id === 'rtmr')
       ?.points.find((p) => p.id === id)?.dosePerMuCGy;
+  const first = c.points[0];
+  const v = first ? dpm(first.id) : null;
+  if (!first || v === null || v === undefined) return c;
+  const mu = Math.round((doseCGy / v) * (1 + offsetPercent / 100) * 10) / 10;
   return {
     ...c,
-    points: c.points.map((p, i) => {
-      const v = dpm(p.id);
-      if (i > 0 || v === null || v === undefined) return p;
-      const mu = Math.round((doseCGy / v) * (1 + offsetPercent / 100) * 10) / 10;
-      return { ...p, planningMu: mu, planningDoseCGy: doseCGy };
-    }),
+    beam: { ...c.beam, planningMu: mu },
+    points: c.points.map((p, i) => (i === 0 ? { ...p, planningDoseCGy: doseCGy } : p)),
   };
 }
 
@@ -129,7 +129,7 @@ const pa = caseDoc(
 );
 const plan: LaminaPlan = {
   format: 'lamina.plan',
-  version: 1,
+  version: 2,
   name: 'Demo: opposed AP/PA pair through the chest, 6 MV, 200 cGy at the isocentre (invented)',
   notes: NOTE,
   beams: [

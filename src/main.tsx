@@ -1,4 +1,4 @@
-// Entry point: restore the autosaved case (if any), then mount the page.
+// Entry point: restore the autosaved case (if any) with its check settings, then mount the page.
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { browserStorage, loadCaseFromStorage } from './state/autosave';
@@ -8,11 +8,15 @@ import { readPrefs, writePrefs } from './state/prefs';
 import { useAppStore } from './state/store';
 import { App } from './ui/App';
 import { openShareLinkFromAddress } from './ui/shareActions';
+import { applyCheckSettings } from './ui/check/pageCheckSettings';
 import './ui/styles.css';
 
 const storage = browserStorage();
 const restored = loadCaseFromStorage(storage);
-if (restored) useAppStore.setState({ history: startHistory(fromCaseFile(restored)) });
+if (restored) {
+  useAppStore.setState({ history: startHistory(fromCaseFile(restored)) });
+  applyCheckSettings(restored.check);
+}
 useAppStore.setState(readPrefs(storage));
 useAppStore.subscribe((s, prev) => {
   if (

@@ -27,7 +27,9 @@ const USAGE = `Usage: npm run calc -- <case.json | plan.json> [--json] [--method
   --methods LIST  comma-separated method ids to compute (default: all available)
   --tolerances H,X  check tolerances in % for homogeneous and heterogeneous paths (default 2,5)
   --prescribe P=D  total dose D (cGy) at point P from all beams: prints the MU per beam
-  --check-method ID  method whose verdict decides the check (default: rtmr when available)
+  --check-method ID  method whose verdict decides the check (default: the superposition, or the
+                  Monte Carlo when run, where a path crosses a heterogeneity; rtmr otherwise)
+  --dose-to water|medium  dose convention of every method (default: the file's, else water)
 ${WATER_DATA_USAGE}
 ${WATER_TABLE_USAGE}
 ${MC_USAGE}`;

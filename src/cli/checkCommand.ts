@@ -37,8 +37,8 @@ export function calculateDocument(doc: ParsedDocument, calc: CliCalc): PlanAnswe
 }
 
 /**
- * Options from --methods, --tolerances H,X, --prescribe POINT=DOSE and --check-method ID; throws on
- * a malformed value.
+ * Options from --methods, --tolerances H,X, --prescribe POINT=DOSE, --check-method ID and
+ * --dose-to water|medium; throws on a malformed value.
  */
 export function planOptionsOf(
   flags: Map<string, string | true>,
@@ -69,6 +69,12 @@ export function planOptionsOf(
   }
   const method = flags.get('check-method');
   if (typeof method === 'string') options.checkMethodId = method;
+  const doseTo = flags.get('dose-to');
+  if (doseTo !== undefined) {
+    if (doseTo !== 'water' && doseTo !== 'medium')
+      throw new Error(`--dose-to must be "water" or "medium" (found ${JSON.stringify(doseTo)})`);
+    options.doseTo = doseTo;
+  }
   return options;
 }
 

@@ -1,6 +1,7 @@
-// Plain-text rendering of the point check: per-beam table, totals over beams and the verdict.
+// Plain-text rendering of the point check: settings, per-beam table, totals over beams, the
+// verdict per method and, last, the verdict in words with the deciding method and the spread.
 import type { PlanCheck } from '../engine/check/planCheck';
-import { VERDICT_TEXT } from '../io/report/reportModel';
+import { doseQuantityLabel } from '../engine/dose/doseQuantity';
 import {
   beamVerdictHeaders,
   beamVerdictRows,
@@ -9,6 +10,12 @@ import {
   totalTableRows,
   TOTAL_TABLE_HEADERS,
 } from '../io/report/reportTables';
+import {
+  decidingMethodText,
+  spreadStatement,
+  verdictStatement,
+} from '../io/report/verdictStatement';
+
 import { table } from './formatReport';
 
 export function formatCheck(check: PlanCheck): string {
@@ -18,9 +25,11 @@ export function formatCheck(check: PlanCheck): string {
   );
   if (check.prescription)
     out.push(`Prescription: ${check.prescription.doseCGy} cGy at ${check.prescription.pointId}`);
+  if (check.doseTo !== null) out.push(`Dose reported as: ${doseQuantityLabel(check.doseTo)}`);
+  out.push(`Deciding method: ${decidingMethodText(check)}`);
   for (const b of check.beams)
     out.push(
-      `Beam ${b.id}${b.label && b.label !== b.id ? ` (${b.label})` : ''}: weight ${b.weight} (${(100 * b.weightFraction).toFixed(1)} %), planning MU ${b.planningMu ?? '—'}`,
+      `Beam ${b.id}${b.label && b.label !== b.id ? ` (${b.label})` : ''}: weight ${b.weight} (${(100 * b.weightFraction).toFixed(1)} %), planning MU ${b.planningMu ?? '— (not given)'}`,
     );
   if (check.methods.length === 0) {
     out.push('(no dose method computed: nothing to check)');
@@ -36,9 +45,8 @@ export function formatCheck(check: PlanCheck): string {
   out.push('');
   out.push('Verdict per beam and method');
   out.push(table(beamVerdictHeaders(check), beamVerdictRows(check)));
-  const decisive = check.methods.find((m) => m.id === check.decisiveMethodId);
-  out.push(
-    `Check verdict (${decisive ? decisive.id : 'no method'}): ${VERDICT_TEXT[check.verdict]}`,
-  );
+  out.push('');
+  out.push(`Check verdict: ${verdictStatement(check)}`);
+  out.push(spreadStatement(check));
   return out.join('\n');
 }

@@ -1,5 +1,6 @@
 // Plain-text rendering of a calculation report for the terminal. Stable layout, documented in
 // the README: a header, the layer table, the point table, then one table per method.
+import { doseQuantityLabel } from '../engine/dose/doseQuantity';
 import type { CalcReport } from '../contract/reports';
 import type { Warning } from '../engine/equilibrium';
 
@@ -26,6 +27,7 @@ export function formatReport(r: CalcReport): string {
   out.push(
     `Beam: ${r.beam.energy}, ${r.beam.setup} (SSD ${num(r.beam.ssdCm, 1)} cm), field ${r.beam.fieldXCm} × ${r.beam.fieldYCm} cm at 100 cm`,
   );
+  out.push(`Dose reported as: ${doseQuantityLabel(r.doseTo)} (every method)`);
   out.push('');
   out.push('Layers');
   out.push(
@@ -60,6 +62,7 @@ export function formatReport(r: CalcReport): string {
     out.push(
       `Method ${m.id}: ${m.label} [${m.variant}] (${m.methodClass}; water data: ${m.waterData})`,
     );
+    if (m.dose) out.push(`  ${doseQuantityLabel(m.dose.quantity)}: ${m.dose.conversion}`);
     out.push(
       table(
         ['point', 'depth cm', 'CF', 'dose/MU cGy', '1 sigma cGy', 'flags'],

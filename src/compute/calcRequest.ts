@@ -2,6 +2,7 @@
 // to calculate (a case or a plan), which water data (src/compute/waterSource), and for what
 // purpose. The purpose fixes grid, methods and variants, so the caller only schedules and draws.
 import type { Tolerances } from '../engine/check/tolerance';
+import type { DoseQuantity } from '../engine/dose/doseQuantity';
 import type { Prescription } from '../engine/check/planCheck';
 import type { McRunOutput } from './monteCarloCalibration';
 import type { WaterSourceSpec } from './waterSource';
@@ -12,7 +13,7 @@ export type CalcPurpose = 'preview' | 'full' | 'plan' | 'monte-carlo';
 
 /** A Monte Carlo run finished (or partial) in the page's worker pool, with the case it belongs to. */
 export interface McRunAttachment {
-  /** monteCarloRunKey of the case and water source the run was started for. */
+  /** monteCarloRunKey of the case, water source and dose convention the run was started for. */
   key: string;
   run: McRunOutput;
   /** Words added to the method's label while the run is not a finished one ("running, partial"). */
@@ -24,11 +25,13 @@ export interface CaseCalcOptions {
   methods?: readonly string[];
   /** Run the Monte Carlo in this calculation (CLI). */
   mc?: McCalcOptions;
-  /** Type-A variants (Batho TAR/TMR, ETAR ρ̃ entered, dose to medium). */
-  typeA?: Pick<
-    TypeAVariants,
-    'bathoTable' | 'etarRhoTilde' | 'etarScatterLengthCm' | 'doseToMedium'
-  >;
+  /** Type-A variants (Batho TAR/TMR, ETAR ρ̃ entered). */
+  typeA?: Pick<TypeAVariants, 'bathoTable' | 'etarRhoTilde' | 'etarScatterLengthCm'>;
+  /**
+   * Dose to water or dose to medium for every method; absent: the file's own setting, else water
+   * (src/compute/doseConvention.ts).
+   */
+  doseTo?: DoseQuantity;
 }
 
 export interface PlanCalcOverrides {
@@ -63,7 +66,8 @@ export type CalcRequest =
       purpose: 'monte-carlo';
       case: unknown;
       water: WaterSourceSpec;
-      run: { histories: number; seed: number; doseToWater?: boolean };
+      /** The run's dose convention: absent, the case's own setting, else water (doseConvention.ts). */
+      run: { histories: number; seed: number; doseTo?: DoseQuantity };
     };
 
 export interface Problem {

@@ -15,6 +15,7 @@ import type { CalcRequest, McRunAttachment } from './calcRequest';
 import type { CaseAnswer } from './calculationService';
 import { mergePreviewReport } from './previewReport';
 import type { WaterChoice } from './waterSource';
+import type { DoseQuantity } from '../engine/dose/doseQuantity';
 import type { CalcReport } from '../contract/reports';
 
 type CaseRequest = Extract<CalcRequest, { purpose: 'preview' | 'full' }>;
@@ -24,10 +25,14 @@ export interface CaseCalculator {
   calculateCase(req: CaseRequest): Promise<CaseAnswer>;
 }
 
-/** The inputs of one calculation: the case as a file, the water source, the current MC run. */
+/**
+ * The inputs of one calculation: the case as a file, the water source, the dose convention and
+ * the current MC run.
+ */
 export interface CalcSnapshot {
   raw: LaminaCase;
   water: WaterChoice;
+  doseTo: DoseQuantity;
   mcRun: McRunAttachment | null;
 }
 
@@ -60,9 +65,9 @@ export const NUDGE_SETTLE_MS = 250;
  */
 export const PREVIEW_CACHE_ENTRIES = 120;
 
-/** The exact input a preview was computed for: the case file and the water data chosen. */
-export function previewKey(raw: LaminaCase, water: WaterChoice): string {
-  return `${water}|${JSON.stringify(raw)}`;
+/** The exact input a preview was computed for: the case file, the water data and dose convention. */
+export function previewKey(raw: LaminaCase, water: WaterChoice, doseTo: DoseQuantity): string {
+  return `${water}|${doseTo}|${JSON.stringify(raw)}`;
 }
 
 type Tagged =
@@ -111,12 +116,13 @@ export class CalcScheduler {
   }
 
   private calcIn(purpose: 'preview' | 'full'): (input: Asked) => Promise<Tagged> {
-    return ({ seq, raw, water, mcRun }) =>
+    return ({ seq, raw, water, doseTo, mcRun }) =>
       (purpose === 'full' ? this.deps.fullWorker() : this.deps.previewWorker())
         .calculateCase({
           purpose,
           case: raw,
           water: { kind: water },
+          options: { doseTo },
           ...(purpose === 'full' && mcRun ? { mcRun } : {}),
         })
         .then(
@@ -190,13 +196,13 @@ export class CalcScheduler {
     });
   }
 
-  /** An edit (or a new water source or Monte Carlo result): ask for what it needs. */
+  /** An edit (or a new water source, dose convention or Monte Carlo result): ask for what it needs. */
   ask(s: CalcSnapshot, wants: { full: boolean; preview: boolean }): void {
     this.clearSettle();
     this.seq += 1;
     const asked: Asked = { ...s, seq: this.seq };
     if (wants.preview) {
-      const key = previewKey(s.raw, s.water);
+      const key = previewKey(s.raw, s.water, s.doseTo);
       const ready = this.lastFull ? this.cache.get(key) : undefined;
       if (ready && this.lastFull && this.gate.preview(this.seq)) {
         speculationStats.hits += 1;
@@ -245,13 +251,14 @@ export class CalcScheduler {
     this.sweepAround = { k, depthCm: around };
     for (const candidate of source.candidates(k, around)) {
       if (id !== this.sweep) return;
-      const key = previewKey(candidate.raw, candidate.water);
+      const key = previewKey(candidate.raw, candidate.water, candidate.doseTo);
       if (this.cache.has(key)) continue;
       try {
         const answer = await this.deps.previewWorker().calculateCase({
           purpose: 'preview',
           case: candidate.raw,
           water: { kind: candidate.water },
+          options: { doseTo: candidate.doseTo },
         });
         if (answer.ok) {
           this.cache.set(key, answer.report);

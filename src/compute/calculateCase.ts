@@ -1,8 +1,9 @@
 // One calculation of a case: geometry, radiological depths and every requested method, in a
 // plain serialisable report. Runs unchanged in a worker, on the main thread and in Node.
 // The deterministic methods (computeCaseParts) and a Monte Carlo run are assembled into the
-// report by one function (assembleReport), which also raises the warnings and puts their flags on
-// every method's points: the CLI's Monte Carlo and the page's worker-pool run go through it alike.
+// report by one function (assembleReport), which also puts every method in the calculation's dose
+// convention, raises the warnings and puts their flags on every method's points: the CLI's Monte
+// Carlo and the page's worker-pool run go through it alike.
 import { ssdCmOf, fieldAtDepthCm, equivalentSquareCm } from '../engine/beam/geometry';
 import { getMaterial } from '../engine/materials/materialLibrary';
 import {
@@ -28,14 +29,15 @@ import {
   type McRunOutput,
 } from './monteCarloCalibration';
 import { runMonteCarlo } from '../engine/montecarlo/runMonteCarlo';
+import { convertMethodDose } from '../engine/dose/doseConversion';
+import { doseQuantityLabel as doseToLabel, type DoseQuantity } from '../engine/dose/doseQuantity';
+import { resolveDoseTo } from './doseConvention';
 
 export { CALC_FORMAT, CALC_VERSION, CAUTIONS, type CalcReport };
 
 export interface McCalcOptions {
   histories: number;
   seed: number;
-  /** Report dose to water instead of dose to medium. */
-  doseToWater?: boolean;
 }
 
 export interface CalcOptions {
@@ -45,10 +47,12 @@ export interface CalcOptions {
   depthStepCm?: number;
   /** Water data resolved by the caller (src/compute/waterSource); the case's own source when absent. */
   waterData?: WaterData;
-  /** Type-A variants (Batho TAR/TMR, ETAR ρ̃ or weights, dose to medium). */
+  /** Type-A variants (Batho TAR/TMR, ETAR ρ̃ or weights). */
   typeA?: TypeAVariants;
   /** Monte Carlo histories and seed; the monte-carlo method runs only when given. */
   mc?: McCalcOptions;
+  /** Dose to water or dose to medium, for every method (default: the case's own, else water). */
+  doseTo?: DoseQuantity;
 }
 
 export function phantomOfCase(c: LaminaCase): SlabPhantom {
@@ -101,20 +105,29 @@ export function computeCaseParts(c: LaminaCase, options: CalcOptions = {}): Case
 }
 
 /**
- * The report of a case: its deterministic methods plus a Monte Carlo run (calibrated here, once,
- * for every caller), the warnings of them all and each method's flags.
+ * The report of a case: its deterministic methods converted to the dose convention `doseTo`
+ * (src/engine/dose/doseConversion.ts; the parts stay native, so a change of convention reuses
+ * them) plus a Monte Carlo run (calibrated here, once, for every caller; a run is made in one
+ * convention, monteCarloRunOptions), the warnings of them all and each method's flags.
  */
 export function assembleReport(
   parts: CaseParts,
   mc: { run: McRunOutput; note?: string | null } | { unavailable: string } | null,
+  doseTo: DoseQuantity,
 ): CalcReport {
   const c = parts.case;
   const { phantom, grid } = parts;
   const ssdCm = ssdCmOf(c.beam.setup);
   const requested = parts.requested ?? [];
-  const methods = [...parts.methods];
+  const methods = parts.methods.map((m) => convertMethodDose(m, doseTo, phantom, c.beam.energy));
   const mcUnavailable: { id: string; reason: string }[] = [];
-  if (mc && 'run' in mc) {
+  const runDoseTo = mc && 'run' in mc ? mc.run.method.dose?.quantity : undefined;
+  if (mc && 'run' in mc && runDoseTo !== doseTo)
+    mcUnavailable.push({
+      id: MONTE_CARLO_METHOD_ID,
+      reason: `the run reports ${runDoseTo ? doseToLabel(runDoseTo) : 'an unstated dose'}, not ${doseToLabel(doseTo)}: run it again`,
+    });
+  else if (mc && 'run' in mc) {
     const calibration = monteCarloCalibration(c, parts.waterData);
     const m = calibratedMonteCarloMethod(
       calibration,
@@ -174,27 +187,40 @@ export function assembleReport(
     unavailable,
     warnings,
     cautions: [...CAUTIONS],
+    doseTo,
   };
 }
 
-/** Run the Monte Carlo of a case in this thread (CLI, tests), calibrated for its water data. */
-export function runMonteCarloForCase(parts: CaseParts, mc: McCalcOptions): McRunOutput {
+/**
+ * Run the Monte Carlo of a case in this thread (CLI, tests), calibrated for its water data, in
+ * the dose convention `doseTo`.
+ */
+export function runMonteCarloForCase(
+  parts: CaseParts,
+  mc: McCalcOptions,
+  doseTo: DoseQuantity,
+): McRunOutput {
   const calibration = monteCarloCalibration(parts.case, parts.waterData);
-  return runMonteCarlo(parts.case, monteCarloRunOptions(calibration, mc), parts.grid);
+  return runMonteCarlo(parts.case, monteCarloRunOptions(calibration, { ...mc, doseTo }), parts.grid);
 }
 
 /** The Monte Carlo block asked of a case: a run, the reason it is not there, or nothing. */
-export function monteCarloBlock(parts: CaseParts, mc: McCalcOptions | undefined) {
+export function monteCarloBlock(
+  parts: CaseParts,
+  mc: McCalcOptions | undefined,
+  doseTo: DoseQuantity,
+) {
   const asked = parts.requested ? parts.requested.includes(MONTE_CARLO_METHOD_ID) : true;
   if (!asked) return null;
   if (!mc)
     return parts.requested
       ? { unavailable: 'needs a number of histories (--mc-histories N)' }
       : null;
-  return { run: runMonteCarloForCase(parts, mc) };
+  return { run: runMonteCarloForCase(parts, mc, doseTo) };
 }
 
 export function calculateCase(c: LaminaCase, options: CalcOptions = {}): CalcReport {
+  const doseTo = resolveDoseTo(options.doseTo, c.check?.doseTo);
   const parts = computeCaseParts(c, options);
-  return assembleReport(parts, monteCarloBlock(parts, options.mc));
+  return assembleReport(parts, monteCarloBlock(parts, options.mc, doseTo), doseTo);
 }

@@ -25,6 +25,7 @@ import {
 import type { CaseCalcOptions, McRunAttachment, PlanCalcOverrides } from './calcRequest';
 import { CASE_WATER, resolveWater, type WaterSourceSpec } from './waterSource';
 import { monteCarloRunKey } from './monteCarloRunKey';
+import { resolveDoseTo } from './doseConvention';
 
 export type { PlanBeamReport, PlanReport };
 
@@ -49,6 +50,7 @@ export function checkInputOf(
     id: beam.id,
     label: beam.label,
     weight: beam.weight,
+    planningMu: c.beam.planningMu,
     layers: report.layers,
     points: c.points,
     methods: report.methods.map((m) => ({
@@ -86,6 +88,8 @@ export function waterChainsOf(
 export function calculatePlan(plan: LaminaPlan, options: PlanCalcOptions = {}): PlanReport {
   const { tolerances, checkMethodId, prescription, water = CASE_WATER, mcRun } = options;
   const partsOf = options.partsOf ?? computeCaseParts;
+  // One dose convention for every beam: the caller's (--dose-to, the page), else the plan's, else water.
+  const doseTo = resolveDoseTo(options.doseTo, plan.doseTo);
   const beams: PlanBeamReport[] = plan.beams.map((b, i) => {
     const resolved = resolveWater(b.case, water);
     if (!resolved.ok) throw new Error(`water data: ${resolved.problems.join('; ')}`);
@@ -96,14 +100,14 @@ export function calculatePlan(plan: LaminaPlan, options: PlanCalcOptions = {}): 
       ...(resolved.waterData ? { waterData: resolved.waterData } : {}),
     });
     const attached =
-      i === 0 && mcRun && mcRun.key === monteCarloRunKey(b.case, water)
+      i === 0 && mcRun && mcRun.key === monteCarloRunKey(b.case, water, doseTo)
         ? { run: mcRun.run, note: mcRun.note }
         : null;
     return {
       id: b.id,
       label: b.label || b.case.name || b.id,
       weight: b.weight,
-      report: assembleReport(parts, attached ?? monteCarloBlock(parts, options.mc)),
+      report: assembleReport(parts, attached ?? monteCarloBlock(parts, options.mc, doseTo), doseTo),
       waterChains: waterChainsOf(b.case, parts.waterData),
     };
   });
@@ -115,6 +119,7 @@ export function calculatePlan(plan: LaminaPlan, options: PlanCalcOptions = {}): 
       tolerances: tolerances ?? plan.tolerances ?? DEFAULT_TOLERANCES,
       prescription: prescription ?? plan.prescription,
       decisiveMethodId: checkMethodId ?? plan.checkMethodId,
+      doseTo,
     },
   );
   return { format: PLAN_CALC_FORMAT, version: 1, planName: plan.name, beams, check };

@@ -1,5 +1,6 @@
 // The worker side of the calculation contract (src/compute/calcRequest.ts): validates the
-// document, resolves the water data once, fixes grid and methods by purpose, reuses the
+// document, resolves the water data and the dose convention once, fixes grid and methods by
+// purpose, reuses the
 // deterministic part of recent full calculations (a Monte Carlo merge or a plan then costs only
 // its assembly) and answers with plain data. The page's workers, the worker API tests and the CLI
 // all call these functions.
@@ -19,7 +20,9 @@ import {
   monteCarloRunOptions,
   type McCalibration,
 } from './monteCarloCalibration';
-import { monteCarloRunKey } from './monteCarloRunKey';
+import { monteCarloRunKey, physicsBeamOf } from './monteCarloRunKey';
+import { resolveDoseTo } from './doseConvention';
+import type { DoseQuantity } from '../engine/dose/doseQuantity';
 import {
   PREVIEW_DEPTH_STEP_CM,
   PREVIEW_ETAR_KNOT_STEP_CM,
@@ -47,6 +50,8 @@ export interface McSetup {
   calibration: McCalibration;
   /** Depth grid of the full report, so the run's curve lines up with the other methods. */
   depthGridCm: number[];
+  /** The dose convention the run reports (part of its key). */
+  doseTo: DoseQuantity;
 }
 export type McSetupAnswer = McSetup | Failure;
 
@@ -59,9 +64,10 @@ const PARTS_ENTRIES = 12;
 const partsCache = new Map<string, CaseParts>();
 
 /**
- * What the deterministic results depend on: beam, layers (not their labels), point ids and
- * depths, water data and options. The case name, notes and planning values do not change them,
- * so an edit of those reuses the parts (assembled with the current case).
+ * What the deterministic results depend on: beam (not its planning MU), layers (not their
+ * labels), point ids and depths, water data and options. The case name, notes, planning values
+ * and check settings (the dose convention is applied at assembly) do not change them, so an edit
+ * of those reuses the parts (assembled with the current case).
  */
 function physicsKey(c: LaminaCase, water: WaterSourceSpec, options: CalcOptions): string {
   return JSON.stringify([
@@ -69,7 +75,7 @@ function physicsKey(c: LaminaCase, water: WaterSourceSpec, options: CalcOptions)
     options.methods ?? null,
     options.depthStepCm ?? null,
     options.typeA ?? null,
-    c.beam,
+    physicsBeamOf(c.beam),
     c.layers.map((l) => [l.materialId, l.thicknessCm, l.densityGPerCm3 ?? null]),
     c.points.map((p) => [p.id, p.depthCm]),
   ]);
@@ -108,6 +114,7 @@ export function calculateCaseRequest(req: CaseRequest): CaseAnswer {
   if (bad) return bad;
   const r = resolveWater(c, req.water) as { ok: true; waterData: CalcOptions['waterData'] };
   const waterData = r.waterData ? { waterData: r.waterData } : {};
+  const doseTo = resolveDoseTo(req.options?.doseTo, c.check?.doseTo);
   if (req.purpose === 'preview') {
     const parts = computeCaseParts(c, {
       ...waterData,
@@ -115,7 +122,7 @@ export function calculateCaseRequest(req: CaseRequest): CaseAnswer {
       methods: PREVIEW_METHOD_IDS,
       typeA: { etarKnotStepCm: PREVIEW_ETAR_KNOT_STEP_CM },
     });
-    return { ok: true, report: assembleReport(parts, null) };
+    return { ok: true, report: assembleReport(parts, null, doseTo) };
   }
   const { methods, typeA } = req.options ?? {};
   const parts = cachedParts(req.water)(c, {
@@ -126,10 +133,16 @@ export function calculateCaseRequest(req: CaseRequest): CaseAnswer {
   });
   const run = req.mcRun;
   const attached =
-    run && run.key === monteCarloRunKey(c, req.water) ? { run: run.run, note: run.note } : null;
+    run && run.key === monteCarloRunKey(c, req.water, doseTo)
+      ? { run: run.run, note: run.note }
+      : null;
   return {
     ok: true,
-    report: assembleReport(parts, attached ?? monteCarloBlock(parts, req.options?.mc)),
+    report: assembleReport(
+      parts,
+      attached ?? monteCarloBlock(parts, req.options?.mc, doseTo),
+      doseTo,
+    ),
   };
 }
 
@@ -164,11 +177,17 @@ export function prepareMonteCarlo(req: McRequest): McSetupAnswer {
   if (bad) return bad;
   const r = resolveWater(c, req.water) as { ok: true; waterData: CalcOptions['waterData'] };
   const calibration = monteCarloCalibration(c, r.waterData);
+  const doseTo = resolveDoseTo(req.run.doseTo, c.check?.doseTo);
   return {
     ok: true,
-    key: monteCarloRunKey(c, req.water),
-    options: monteCarloRunOptions(calibration, req.run),
+    key: monteCarloRunKey(c, req.water, doseTo),
+    options: monteCarloRunOptions(calibration, {
+      histories: req.run.histories,
+      seed: req.run.seed,
+      doseTo,
+    }),
     calibration,
     depthGridCm: depthGridCm(phantomOfCase(c).totalThicknessCm, FULL_DEPTH_STEP_CM),
+    doseTo,
   };
 }

@@ -18,6 +18,7 @@ import {
   prepareMonteCarlo,
 } from './calculationService';
 import { measuredTableOf } from './waterSource';
+import { resolveDoseTo } from './doseConvention';
 
 export interface RadiologicalCurve {
   depthCm: number[];
@@ -42,7 +43,8 @@ export const computeApi = {
   },
   /**
    * The x–z dose plane (y = 0) and lateral profiles of a case from a type-B engine (default the
-   * superposition), in cGy/MU; lateral profiles at the case's point depths unless given.
+   * superposition), in cGy/MU; lateral profiles at the case's point depths unless given; in the
+   * dose convention asked for, else the case's own, else dose to water (doseConvention.ts).
    */
   dosePlane(
     raw: unknown,
@@ -62,6 +64,7 @@ export const computeApi = {
       plane: typeBDosePlane(c.beam.energy, makeSlabPhantom(c.layers), beam, {
         ...options,
         profileDepthsCm,
+        doseTo: resolveDoseTo(options.doseTo, c.check?.doseTo),
       }),
     };
   },

@@ -5,13 +5,16 @@
 // per MU at a point is CF_MC × the table's water dose per MU there (CF_MC = MC dose in the case /
 // MC dose in the matched water run, the run's 'water' scenario), so it differs from the other
 // methods only by its heterogeneity physics; its 1σ is σ(CF_MC) × the water dose (the table
-// carries no σ), and the table's own flags (extrapolation) travel with it.
+// carries no σ), and the table's own flags (extrapolation) travel with it. The run is made in the
+// calculation's dose convention (CF and dose alike), so CF_MC × the table's water dose is already
+// in that convention.
 import { equivalentSquareCm } from '../engine/beam/geometry';
 import { modelledWaterData } from '../engine/beam/modelledBeam';
 import type { WaterData } from '../engine/beam/waterData';
 import type { MethodResult } from '../engine/methodResult';
 import { MONTE_CARLO_METHOD_ID } from '../engine/methodRegistry';
 import type { McOptions } from '../engine/montecarlo/monteCarloPlan';
+import type { DoseQuantity } from '../engine/dose/doseQuantity';
 import type { McResult } from '../engine/montecarlo/monteCarloResult';
 import type { LaminaCase } from '../io/caseSchema';
 import { isMeasuredWater } from './waterSource';
@@ -60,15 +63,19 @@ export function monteCarloCalibration(
   };
 }
 
-/** The Monte Carlo engine options of a run with this calibration. */
+/**
+ * The Monte Carlo engine options of a run with this calibration, in one dose convention: the
+ * engine scores dose to medium and converts once (src/engine/dose/doseConversion.ts), so a run
+ * belongs to its convention (it is part of the run key, monteCarloRunKey.ts).
+ */
 export function monteCarloRunOptions(
   calibration: McCalibration,
-  run: { histories: number; seed: number; doseToWater?: boolean | undefined },
+  run: { histories: number; seed: number; doseTo: DoseQuantity },
 ): McOptions {
   return {
     histories: run.histories,
     seed: run.seed,
-    ...(run.doseToWater ? { doseToWater: true } : {}),
+    doseTo: run.doseTo,
     referenceDosePerMuCGy: calibration.referenceDosePerMuCGy,
     collimatorScatterFactor: calibration.collimatorScatterFactor,
     referenceDMaxCm: calibration.referenceDMaxCm,

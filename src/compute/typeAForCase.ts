@@ -10,7 +10,6 @@ import type {
 import { resolveWater } from './waterSource';
 import { etarScatterWeights } from '../engine/kernels/scatterWeights';
 import { knotInterpolatedWeights } from './etarKnotWeights';
-import { muEnRatioOfLayerForBeam } from '../engine/corrections/doseToMedium';
 import { TYPE_A_METHOD_IDS, TYPE_A_METHODS } from '../engine/corrections/typeAMethods';
 import { typeAMethodResults } from '../engine/corrections/typeAResults';
 import type { MethodResult } from '../engine/methodResult';
@@ -31,11 +30,11 @@ function kernelEtarWeights(c: LaminaCase): ScatterWeightFunction {
 }
 
 /**
- * Type-A variant choices; `doseToMedium` applies the spectrum-weighted (μ_en/ρ) ratio in the Batho
- * forms; `etarKnotStepCm` (drag previews only) evaluates ETAR's kernel weights at knots this far
- * apart at most and interpolates between them (src/compute/etarKnotWeights).
+ * Type-A variant choices; `etarKnotStepCm` (drag previews only) evaluates ETAR's kernel weights at
+ * knots this far apart at most and interpolates between them (src/compute/etarKnotWeights). Dose
+ * to medium is a calculation option (CalcOptions.doseTo), applied to every method alike.
  */
-export type TypeAVariants = CorrectionOptions & { doseToMedium?: boolean; etarKnotStepCm?: number };
+export type TypeAVariants = CorrectionOptions & { etarKnotStepCm?: number };
 
 export interface TypeAOutcome {
   methods: MethodResult[];
@@ -70,9 +69,7 @@ export function typeAForCase(
   givenWaterData?: WaterData,
   variants: TypeAVariants = {},
 ): TypeAOutcome {
-  const { doseToMedium, etarKnotStepCm, ...options } = variants;
-  if (doseToMedium && !options.muEnRatioOfLayer)
-    options.muEnRatioOfLayer = muEnRatioOfLayerForBeam(c.beam.energy);
+  const { etarKnotStepCm, ...options } = variants;
   if (options.etarRhoTilde === undefined && !options.etarWeights) {
     options.etarWeights = kernelEtarWeights(c);
     options.etarWeightsSource = 'scatter part of the water kernel (our Monte Carlo)';

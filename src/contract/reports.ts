@@ -5,6 +5,7 @@ import type { DosePerMuFactors } from '../engine/check/dosePerMu';
 import type { PlanCheck } from '../engine/check/planCheck';
 import type { Warning } from '../engine/equilibrium/warning';
 import type { MethodResult } from '../engine/methodResult';
+import type { DoseQuantity } from '../engine/dose/doseQuantity';
 
 export const CALC_FORMAT = 'lamina.calc';
 export const CALC_VERSION = 1;
@@ -43,6 +44,8 @@ export interface CalcReport {
   /** Equilibrium and validity warnings (src/engine/equilibrium), sorted by depth. */
   warnings: Warning[];
   cautions: string[];
+  /** The dose convention of every method's dose (each method's `dose` says how it got there). */
+  doseTo: DoseQuantity;
 }
 
 export interface PlanBeamReport {

@@ -1,7 +1,8 @@
 // The one list of dose methods: id, order, label, class and cost. Reports list methods in this
 // order; the palette styles them by it; the warnings name them from it; the preview computes the
-// fast ones and carries the slow ones over; the check reads their class. MethodResult.id is one
-// of these ids.
+// fast ones and carries the slow ones over; the dose conversion reads which dose each computes
+// natively; the check picks its default deciding method by their preference ranks.
+// MethodResult.id is one of these ids.
 import type { MethodClass } from './methodResult';
 
 export interface MethodInfo {
@@ -14,6 +15,19 @@ export interface MethodInfo {
   readsWaterData: boolean;
   /** One-dimensional table-based heterogeneity correction (type A, the water method excluded). */
   oneDCorrection: boolean;
+  /**
+   * The dose the method computes natively (src/engine/dose/doseConversion.ts): 'water' for
+   * methods built on water data, 'medium' for the kernel engines and the Monte Carlo (energy per
+   * gram of the medium), null for the water method (a water phantom: the same in both).
+   */
+  nativeDose: 'water' | 'medium' | null;
+  /**
+   * Preference to decide the check by default (src/engine/check/decidingMethod.ts), 1 = first:
+   * across a heterogeneity the engines that transport scatter and electrons through the slabs
+   * come first; along a water-like path the water data at the point (ratio of TMR) come first.
+   * The uncorrected water method comes last on both.
+   */
+  decidingRank: { heterogeneous: number; homogeneous: number };
 }
 
 export const METHODS = [
@@ -24,6 +38,8 @@ export const METHODS = [
     cost: 'fast',
     readsWaterData: true,
     oneDCorrection: false,
+    nativeDose: null,
+    decidingRank: { heterogeneous: 9, homogeneous: 9 },
   },
   {
     id: 'rtmr',
@@ -32,6 +48,8 @@ export const METHODS = [
     cost: 'fast',
     readsWaterData: true,
     oneDCorrection: true,
+    nativeDose: 'water',
+    decidingRank: { heterogeneous: 7, homogeneous: 1 },
   },
   {
     id: 'epl-pdd',
@@ -40,6 +58,8 @@ export const METHODS = [
     cost: 'fast',
     readsWaterData: true,
     oneDCorrection: true,
+    nativeDose: 'water',
+    decidingRank: { heterogeneous: 8, homogeneous: 2 },
   },
   {
     id: 'batho',
@@ -48,6 +68,8 @@ export const METHODS = [
     cost: 'fast',
     readsWaterData: true,
     oneDCorrection: true,
+    nativeDose: 'water',
+    decidingRank: { heterogeneous: 6, homogeneous: 4 },
   },
   {
     id: 'batho-modified',
@@ -56,6 +78,8 @@ export const METHODS = [
     cost: 'fast',
     readsWaterData: true,
     oneDCorrection: true,
+    nativeDose: 'water',
+    decidingRank: { heterogeneous: 5, homogeneous: 3 },
   },
   {
     id: 'etar',
@@ -64,6 +88,8 @@ export const METHODS = [
     cost: 'fast',
     readsWaterData: true,
     oneDCorrection: true,
+    nativeDose: 'water',
+    decidingRank: { heterogeneous: 4, homogeneous: 5 },
   },
   {
     id: 'pencil-beam',
@@ -72,6 +98,8 @@ export const METHODS = [
     cost: 'fast',
     readsWaterData: false,
     oneDCorrection: false,
+    nativeDose: 'medium',
+    decidingRank: { heterogeneous: 3, homogeneous: 7 },
   },
   {
     id: 'superposition',
@@ -80,6 +108,8 @@ export const METHODS = [
     cost: 'slow',
     readsWaterData: false,
     oneDCorrection: false,
+    nativeDose: 'medium',
+    decidingRank: { heterogeneous: 2, homogeneous: 6 },
   },
   {
     id: 'monte-carlo',
@@ -88,6 +118,8 @@ export const METHODS = [
     cost: 'slow',
     readsWaterData: false,
     oneDCorrection: false,
+    nativeDose: 'medium',
+    decidingRank: { heterogeneous: 1, homogeneous: 8 },
   },
 ] as const satisfies readonly MethodInfo[];
 
@@ -122,3 +154,15 @@ export const ONE_D_METHOD_IDS = idsWhere((m) => m.oneDCorrection);
 /** Methods that read the water data in use. */
 export const WATER_DATA_METHOD_IDS = idsWhere((m) => m.readsWaterData);
 export const MONTE_CARLO_METHOD_ID: MethodId = 'monte-carlo';
+
+/** Methods whose native dose is dose to medium (the kernel engines and the Monte Carlo). */
+export const NATIVE_MEDIUM_METHOD_IDS = idsWhere((m) => m.nativeDose === 'medium');
+/** Methods that compute in water throughout (no conversion between conventions). */
+export const WATER_PHANTOM_METHOD_IDS = idsWhere((m) => m.nativeDose === null);
+
+/** Method ids by their preference to decide the check on a heterogeneous or water-like path. */
+export function decidingPreference(path: 'heterogeneous' | 'homogeneous'): readonly MethodId[] {
+  return [...(METHODS as readonly MethodInfo[])]
+    .sort((a, b) => a.decidingRank[path] - b.decidingRank[path])
+    .map((m) => m.id as MethodId);
+}

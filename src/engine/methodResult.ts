@@ -1,6 +1,7 @@
 // The shape every dose method returns, so the CLI, the worker API and the page treat all
 // methods alike. Curves are sampled on the same depth grid for every method of a case.
 import type { MethodId } from './methodRegistry';
+import type { DoseNote } from './dose/doseConversion';
 
 export type MethodClass = 'none' | 'type A' | 'type B' | 'type C';
 
@@ -37,4 +38,6 @@ export interface MethodResult {
   waterData: string;
   curve: MethodCurve;
   points: MethodPoint[];
+  /** Dose to water or to medium, and how it was converted (set by dose/doseConversion.ts). */
+  dose?: DoseNote;
 }

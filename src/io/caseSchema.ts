@@ -1,12 +1,15 @@
 // The Lamina case file: a versioned JSON document describing one beam's path through a slab
-// phantom and the points of interest on its central axis. Every rule here names its field.
+// phantom, the points of interest on its central axis, the planning system's values to compare
+// with (the beam's MU, the dose at each point) and the check's settings. Every rule here names
+// its field. Version 2 moved the planning MU from the points to the beam (caseMigrations.ts).
 import { z } from 'zod';
+import { caseCheckSchema } from './checkSettingsSchema';
 import { BEAM_ENERGIES } from '../engine/beam/energies';
 import { MATERIAL_IDS } from '../engine/materials/materialLibrary';
 import { buildMeasuredWaterData } from '../engine/beam/measuredTable';
 
 export const CASE_FORMAT = 'lamina.case';
-export const CASE_VERSION = 1;
+export const CASE_VERSION = 2;
 
 /** Limits that keep inputs physical and inside what the engine is built for. */
 export const LIMITS = {
@@ -19,6 +22,11 @@ export const LIMITS = {
   maxFieldCm: 40,
   maxLayers: 50,
   maxPoints: 50,
+  /**
+   * Thinnest layer (cm): 10 µm, far below a CT voxel or a film; thinner "layers" only carry
+   * rounding (1e-323 cm gave a non-finite superposition curve).
+   */
+  minLayerThicknessCm: 0.001,
 } as const;
 
 const finite = (what: string) =>
@@ -30,6 +38,10 @@ export const layerSchema = z.strictObject({
   }),
   thicknessCm: finite('thickness')
     .refine((v) => v > 0, 'thickness must be > 0 cm')
+    .refine(
+      (v) => v >= LIMITS.minLayerThicknessCm,
+      `thickness must be ≥ ${LIMITS.minLayerThicknessCm} cm`,
+    )
     .refine(
       (v) => v <= LIMITS.maxLayerThicknessCm,
       `thickness must be ≤ ${LIMITS.maxLayerThicknessCm} cm`,
@@ -79,6 +91,13 @@ export const beamSchema = z.strictObject({
   fieldXCm: field('field X'),
   /** Field length (Y) at 100 cm from the source (cm). */
   fieldYCm: field('field Y'),
+  /**
+   * Monitor units the planning system gives this beam, for comparison. One value per beam: every
+   * point of the case is checked against it.
+   */
+  planningMu: finite('planning MU')
+    .refine((v) => v > 0, 'planning MU must be > 0')
+    .optional(),
 });
 
 export const pointSchema = z.strictObject({
@@ -87,13 +106,10 @@ export const pointSchema = z.strictObject({
     .min(1, 'point id must not be empty')
     .max(40, 'point id must be at most 40 characters'),
   depthCm: finite('depth').refine((v) => v >= 0, 'depth must be ≥ 0 cm'),
-  /** Dose per fraction from the planning system at this point (cGy), for comparison. */
+  /** Dose per fraction from the planning system at this point from this beam (cGy), for comparison. */
   planningDoseCGy: finite('planning dose')
     .refine((v) => v >= 0, 'planning dose must be ≥ 0 cGy')
-    .optional(),
-  /** Monitor units from the planning system for this beam, for comparison. */
-  planningMu: finite('planning MU')
-    .refine((v) => v > 0, 'planning MU must be > 0')
+    .refine((v) => v === 0 || v >= 0.001, 'planning dose must be 0 (none) or ≥ 0.001 cGy')
     .optional(),
 });
 
@@ -161,6 +177,8 @@ export const caseSchema = z
       .max(LIMITS.maxPoints, `points: at most ${LIMITS.maxPoints} points`),
     /** Measured water data (optional; type-A methods need water data). */
     waterData: waterDataSchema.optional(),
+    /** The check's settings saved with the case (prescription, tolerances, method, dose convention). */
+    check: caseCheckSchema.optional(),
   })
   .superRefine((c, ctx) => {
     const total = c.layers.reduce((s, l) => s + l.thicknessCm, 0);
@@ -188,6 +206,13 @@ export const caseSchema = z
         });
       seen.add(p.id);
     });
+    const rx = c.check?.prescription;
+    if (rx && !c.points.some((p) => p.id === rx.pointId))
+      ctx.addIssue({
+        code: 'custom',
+        path: ['check', 'prescription', 'pointId'],
+        message: `no point "${rx.pointId}" in this case`,
+      });
     if (c.beam.setup.kind === 'SAD') {
       const { sadCm, isocentreDepthCm } = c.beam.setup;
       if (isocentreDepthCm > total + 1e-9)

@@ -14,7 +14,10 @@ export function toCsv(fields: string[], rows: Cell[][]): string {
   return Papa.unparse({ fields, data: rows.map((r) => r.map((c) => (c === null ? '' : c))) });
 }
 
-/** One row per depth: geometric and radiological depth, then dose per MU and CF of each method (and 1σ where a method has one). */
+/**
+ * One row per depth: geometric and radiological depth, then dose per MU and CF of each method (and
+ * 1σ where a method has one); the last column names the dose convention (water or medium).
+ */
 export function curvesCsv(report: CalcReport): string {
   const fields = ['depth_cm', 'radiological_depth_cm'];
   for (const m of report.methods) {
@@ -28,9 +31,10 @@ export function curvesCsv(report: CalcReport): string {
       row.push(cell(m.curve.dosePerMuCGy[i]), cell(m.curve.cf[i]));
       if (m.curve.sigmaDosePerMuCGy) row.push(cell(m.curve.sigmaDosePerMuCGy[i]));
     }
+    row.push(report.doseTo);
     return row;
   });
-  return toCsv(fields, rows);
+  return toCsv([...fields, 'dose_to'], rows);
 }
 
 export const POINT_CHECK_FIELDS = [
@@ -54,6 +58,8 @@ export const POINT_CHECK_FIELDS = [
   'sigma_mu_diff_percent',
   'sigma_dose_for_planning_mu_cgy',
   'sigma_dose_diff_percent',
+  // Dose to water or dose to medium (every dose in the row).
+  'dose_to',
 ];
 
 /** One row per beam, point and method. */
@@ -82,6 +88,7 @@ export function pointCheckCsv(check: PlanCheck): string {
           cell(m.sigma?.muDiffPercent),
           cell(m.sigma?.doseCGy),
           cell(m.sigma?.doseDiffPercent),
+          check.doseTo,
         ]);
   return toCsv(POINT_CHECK_FIELDS, rows);
 }
@@ -97,6 +104,7 @@ export const TOTAL_CHECK_FIELDS = [
   // 1σ of a statistical method summed over beams (quadrature); empty otherwise.
   'sigma_dose_cgy',
   'sigma_diff_percent',
+  'dose_to',
 ];
 
 /** One row per shared point and method: dose summed over beams. */
@@ -114,6 +122,7 @@ export function totalCheckCsv(check: PlanCheck): string {
         m.verdict,
         cell(m.sigma?.doseCGy),
         cell(m.sigma?.diffPercent),
+        check.doseTo,
       ]);
   return toCsv(TOTAL_CHECK_FIELDS, rows);
 }

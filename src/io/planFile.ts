@@ -3,6 +3,8 @@
 // "beams[1].case.layers[0].thicknessCm". A single-beam case file opens as a one-beam plan.
 import { formatPath, validateCase, type CaseProblem } from './caseFile';
 import { CASE_FORMAT, type LaminaCase } from './caseSchema';
+import type { CaseCheckSettings } from './checkSettingsSchema';
+import type { DoseQuantity } from '../engine/dose/doseQuantity';
 import {
   PLAN_FORMAT,
   PLAN_VERSION,
@@ -27,21 +29,47 @@ export interface LaminaPlan {
   prescription?: PlanPrescription | undefined;
   tolerances?: PlanTolerances | undefined;
   checkMethodId?: string | undefined;
+  doseTo?: DoseQuantity | undefined;
 }
 
 export type PlanParseResult =
   { ok: true; value: LaminaPlan } | { ok: false; problems: CaseProblem[] };
 
-/** A one-beam plan around a single-beam case (weight 1, no prescription). */
+/** The plan-level check settings of a plan (absent fields left out). */
+export function checkSettingsOfPlan(p: LaminaPlan): CaseCheckSettings {
+  const s: CaseCheckSettings = {};
+  if (p.prescription) s.prescription = { ...p.prescription };
+  if (p.tolerances) s.tolerances = { ...p.tolerances };
+  if (p.checkMethodId) s.checkMethodId = p.checkMethodId;
+  if (p.doseTo) s.doseTo = p.doseTo;
+  return s;
+}
+
+/**
+ * A one-beam plan around a single-beam case (weight 1): the case's `check` block becomes the
+ * plan's prescription, tolerances, deciding method and dose convention; the beam's case keeps
+ * no check block of its own (the plan's settings are the only ones read).
+ */
 export function planOfCase(c: LaminaCase): LaminaPlan {
+  const { check, ...beamCase } = c;
   return {
     format: PLAN_FORMAT,
     version: PLAN_VERSION,
     name: c.name,
-    beams: [{ id: 'beam-1', weight: 1, case: c }],
+    beams: [{ id: 'beam-1', weight: 1, case: beamCase }],
+    ...(check?.prescription ? { prescription: { ...check.prescription } } : {}),
+    ...(check?.tolerances ? { tolerances: { ...check.tolerances } } : {}),
+    ...(check?.checkMethodId ? { checkMethodId: check.checkMethodId } : {}),
+    ...(check?.doseTo ? { doseTo: check.doseTo } : {}),
   };
 }
 
+/** A case with these check settings (the `check` block left out when there are none). */
+export function caseWithCheckSettings(c: LaminaCase, s: CaseCheckSettings): LaminaCase {
+  const rest = { ...c };
+  delete rest.check;
+  return Object.keys(s).length > 0 ? { ...rest, check: s } : rest;
+}
 function validatePlanDocument(raw: unknown): PlanParseResult {
   const shell = planShellSchema.safeParse(raw);
   if (!shell.success)
@@ -69,7 +97,7 @@ function validatePlanDocument(raw: unknown): PlanParseResult {
   )
     problems.push({ path: 'prescription.pointId', message: `no beam has a point "${rx.pointId}"` });
   if (problems.length > 0) return { ok: false, problems };
-  return { ok: true, value: { ...shell.data, beams } };
+  return { ok: true, value: { ...shell.data, version: PLAN_VERSION, beams } };
 }
 
 /**
@@ -105,7 +133,18 @@ export function serializePlan(p: LaminaPlan): string {
   return `${JSON.stringify({ ...p, format: PLAN_FORMAT, version: PLAN_VERSION }, null, 2)}\n`;
 }
 
-/** True when a plan is just one beam around a case with nothing plan-specific (save it as a case). */
+/**
+ * True when a plan is one beam that a case file can hold whole (save it as a case, the settings
+ * in its `check` block): weight 1, no label of its own.
+ */
 export function isPlainCase(p: LaminaPlan): boolean {
-  return p.beams.length === 1 && !p.prescription && !p.tolerances && !p.checkMethodId;
+  const b = p.beams[0];
+  return p.beams.length === 1 && b !== undefined && b.weight === 1 && !b.label;
+}
+
+/** The case file of a one-beam plan: its case with the plan's settings in the `check` block. */
+export function caseOfPlainPlan(p: LaminaPlan): LaminaCase | null {
+  const b = p.beams[0];
+  if (!b || p.beams.length !== 1) return null;
+  return caseWithCheckSettings(b.case, checkSettingsOfPlan(p));
 }

@@ -1,20 +1,27 @@
 // The Lamina plan file: several beams, each a complete single-beam case (its own slab path,
-// set-up and field, and the depth of every shared point along that beam), with a weight, an
-// optional prescription at a shared point and the check tolerances. Points are matched by id
-// across beams. A single-beam case file stays valid on its own and lifts into a one-beam plan.
+// set-up, field and planning MU, and the depth of every shared point along that beam), with a
+// weight, and the check's settings for the whole plan: an optional prescription at a shared
+// point, the tolerances, the deciding method and the dose convention (a beam case's own `check`
+// block is not read inside a plan). Points are matched by id across beams. A single-beam case
+// file stays valid on its own and lifts into a one-beam plan with its settings.
+// Version 2 added `doseTo`; its beams' cases are case version 2 (version-1 plans still read).
 import { z } from 'zod';
+import {
+  checkMethodIdSchema,
+  doseToSchema,
+  prescriptionSchema,
+  tolerancesSchema,
+} from './checkSettingsSchema';
+
+export { prescriptionSchema, tolerancesSchema };
+export type { PlanPrescription, PlanTolerances } from './checkSettingsSchema';
 
 export const PLAN_FORMAT = 'lamina.plan';
-export const PLAN_VERSION = 1;
+export const PLAN_VERSION = 2;
 export const MAX_BEAMS = 12;
 
 const finite = (what: string) =>
   z.number({ error: `${what} must be a number` }).refine(Number.isFinite, `${what} must be finite`);
-
-const percent = (what: string) =>
-  finite(what)
-    .refine((v) => v > 0, `${what} must be > 0 %`)
-    .refine((v) => v <= 100, `${what} must be ≤ 100 %`);
 
 export const planBeamShellSchema = z.strictObject({
   id: z
@@ -27,22 +34,12 @@ export const planBeamShellSchema = z.strictObject({
   case: z.unknown(),
 });
 
-export const tolerancesSchema = z.strictObject({
-  homogeneousPercent: percent('homogeneous tolerance'),
-  heterogeneousPercent: percent('heterogeneous tolerance'),
-});
-
-export const prescriptionSchema = z.strictObject({
-  pointId: z
-    .string({ error: 'prescription point must be text' })
-    .min(1, 'prescription point must not be empty'),
-  doseCGy: finite('prescribed dose').refine((v) => v > 0, 'prescribed dose must be > 0 cGy'),
-});
-
 export const planShellSchema = z
   .strictObject({
     format: z.literal(PLAN_FORMAT, { error: `format must be "${PLAN_FORMAT}"` }),
-    version: z.literal(PLAN_VERSION, { error: `version must be ${PLAN_VERSION}` }),
+    version: z.union([z.literal(1), z.literal(PLAN_VERSION)], {
+      error: `version must be 1 or ${PLAN_VERSION}`,
+    }),
     name: z.string({ error: 'name must be text' }).max(200, 'name must be at most 200 characters'),
     notes: z.string().max(5000, 'notes must be at most 5000 characters').optional(),
     beams: z
@@ -51,8 +48,10 @@ export const planShellSchema = z
       .max(MAX_BEAMS, `beams: at most ${MAX_BEAMS} beams`),
     prescription: prescriptionSchema.optional(),
     tolerances: tolerancesSchema.optional(),
-    /** Method whose verdict decides the check (a preferred available method when absent). */
-    checkMethodId: z.string().max(40).optional(),
+    /** Method whose verdict decides the check (the default for the path when absent). */
+    checkMethodId: checkMethodIdSchema.optional(),
+    /** Dose to water or dose to medium for every method and beam (water when absent). */
+    doseTo: doseToSchema.optional(),
   })
   .superRefine((p, ctx) => {
     const seen = new Set<string>();
@@ -74,5 +73,3 @@ export const planShellSchema = z
   });
 
 export type PlanShell = z.infer<typeof planShellSchema>;
-export type PlanTolerances = z.infer<typeof tolerancesSchema>;
-export type PlanPrescription = z.infer<typeof prescriptionSchema>;

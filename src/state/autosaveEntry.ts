@@ -1,9 +1,13 @@
 // The autosave entry kept in browser storage, versioned so that a later Lamina can still read
 // what an earlier one wrote. Storage version 1 was the bare case document; version 2 wraps it in
-// an envelope {format, version, savedAt, case}. Each migration lifts an entry one version; an
+// an envelope {format, version, savedAt, case}; the case carries the check's settings in its
+// optional `check` block, as a saved file does (entries without one restore the defaults). Each
+// migration lifts an entry one version; an
 // entry from a newer Lamina, or one that no longer reads, is reported as unreadable (never guessed
 // at), so the caller can keep it under a backup key.
 import { validateCase, describeProblems } from '../io/caseFile';
+import { caseCheckSchema } from '../io/checkSettingsSchema';
+import { migrateCase } from '../io/caseMigrations';
 import {
   beamSchema,
   CASE_FORMAT,
@@ -102,8 +106,10 @@ export function readAutosaveEntry(text: string | null): AutosaveRead {
  * valid on its own. The calculation then lists the remaining problems.
  */
 export function lenientCase(raw: unknown): LaminaCase | null {
-  if (typeof raw !== 'object' || raw === null) return null;
-  const d = raw as Record<string, unknown>;
+  // Older case versions are lifted first (a refused migration leaves the entry unreadable).
+  const migrated = migrateCase(raw);
+  if (!migrated.ok) return null;
+  const d = migrated.value as Record<string, unknown>;
   if (d.format !== CASE_FORMAT || d.version !== CASE_VERSION) return null;
   const beam = beamSchema.safeParse(d.beam);
   const layers = Array.isArray(d.layers) ? d.layers.map((l) => layerSchema.safeParse(l)) : [];
@@ -120,6 +126,8 @@ export function lenientCase(raw: unknown): LaminaCase | null {
   };
   const w = waterDataSchema.safeParse(d.waterData);
   if (w.success) c.waterData = w.data;
+  const check = caseCheckSchema.safeParse(d.check);
+  if (check.success) c.check = check.data;
   return c;
 }
 

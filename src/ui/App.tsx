@@ -6,6 +6,7 @@ import { setNotice, setTab, setTheme, useAppStore, type Theme, type ViewTab } fr
 import { BeamPanel } from './BeamPanel';
 import { CfView, DoseView } from './ChartViews';
 import { FileBar } from './FileBar';
+import { DoseToControl } from './DoseToControl';
 import { openCaseFile } from './caseFileActions';
 import { LayerList } from './LayerList';
 import { MountPoint } from './MountPoint';
@@ -227,6 +228,7 @@ export function App() {
         <span className="tagline">photon-beam heterogeneity corrections in slab phantoms</span>
         <CalcStatus />
         <FileBar />
+        <DoseToControl />
         <ThemeToggle />
       </header>
       <aside className="cautions" aria-label="Cautions" data-testid="cautions">

@@ -7,6 +7,7 @@ import { redoEdit, replaceCase, undoEdit, useAppStore } from '../state/store';
 import { fileNameFor, openCaseFile } from './caseFileActions';
 import { downloadText } from './download';
 import { copyShareLink } from './shareActions';
+import { caseWithPageCheck } from './check/pageCheckSettings';
 
 function isTextEntry(el: EventTarget | null): boolean {
   return (
@@ -35,7 +36,7 @@ export function FileBar() {
 
   const save = () => {
     const c = toCaseFile(useAppStore.getState().history.present);
-    downloadText(fileNameFor(c.name), serializeCase(c), 'application/json');
+    downloadText(fileNameFor(c.name), serializeCase(caseWithPageCheck(c)), 'application/json');
   };
 
   return (

@@ -2,6 +2,7 @@
 // as it was and lists its problems with their field paths.
 import { parseCaseText } from '../io/caseFile';
 import { replaceCase, setNotice } from '../state/store';
+import { applyCheckSettings } from './check/pageCheckSettings';
 
 export function fileNameFor(name: string): string {
   const slug = name
@@ -38,6 +39,7 @@ export async function openCaseFile(file: File): Promise<void> {
   const r = parseCaseText(text);
   if (r.ok) {
     replaceCase(r.value);
+    applyCheckSettings(r.value.check);
     setNotice({ kind: 'info', title: `Opened ${file.name}`, lines: [] });
   } else
     setNotice({

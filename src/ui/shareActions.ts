@@ -3,9 +3,10 @@
 import { decodeShareHash, isShareHash, shareUrlOf } from '../io/shareLink';
 import { toCaseFile } from '../state/editorCase';
 import { replaceCase, setNotice, useAppStore } from '../state/store';
+import { applyCheckSettings, caseWithPageCheck } from './check/pageCheckSettings';
 
 export async function copyShareLink(): Promise<void> {
-  const c = toCaseFile(useAppStore.getState().history.present);
+  const c = caseWithPageCheck(toCaseFile(useAppStore.getState().history.present));
   let url: string;
   try {
     url = await shareUrlOf(window.location.href, { kind: 'case', value: c });
@@ -52,6 +53,7 @@ export async function openShareLinkFromAddress(): Promise<void> {
     return;
   }
   replaceCase(r.doc.value);
+  applyCheckSettings(r.doc.value.check);
   setNotice({
     kind: 'info',
     title: `Opened the case “${r.doc.value.name}” from the link.`,

@@ -1,9 +1,19 @@
-// Saves the case to local storage shortly after every edit (debounced); failures become a
-// message on the page and never touch the case in memory.
+// Saves the case, with the check's settings (prescription, tolerances, deciding method, dose
+// convention) in its `check` block, to local storage shortly after every edit of either
+// (debounced); failures become a message on the page and never touch the case in memory.
 import { useEffect } from 'react';
 import { browserStorage, saveCaseToStorage, takeRestoreMessage } from '../state/autosave';
 import { toCaseFile } from '../state/editorCase';
-import { setStorageMessage, useAppStore } from '../state/store';
+import { setStorageMessage, useAppStore, type AppState } from '../state/store';
+import { caseWithPageCheck } from './check/pageCheckSettings';
+
+/** The check's settings that travel with the case (the rest of the check slice does not). */
+const settingsChanged = (a: AppState['check'], b: AppState['check']): boolean =>
+  a.prescriptionPointId !== b.prescriptionPointId ||
+  a.prescriptionDoseCGy !== b.prescriptionDoseCGy ||
+  a.tolerances !== b.tolerances ||
+  a.checkMethodId !== b.checkMethodId ||
+  a.doseTo !== b.doseTo;
 
 export const AUTOSAVE_DELAY_MS = 400;
 
@@ -14,12 +24,13 @@ export function useAutosave(): void {
     if (restoreMessage) setStorageMessage(restoreMessage);
     let timer: ReturnType<typeof setTimeout> | undefined;
     const unsubscribe = useAppStore.subscribe((s, prev) => {
-      if (s.history.present === prev.history.present) return;
+      if (s.history.present === prev.history.present && !settingsChanged(s.check, prev.check))
+        return;
       clearTimeout(timer);
       timer = setTimeout(() => {
         const r = saveCaseToStorage(
           browserStorage(),
-          toCaseFile(useAppStore.getState().history.present),
+          caseWithPageCheck(toCaseFile(useAppStore.getState().history.present)),
         );
         setStorageMessage(r.ok ? null : r.message);
       }, AUTOSAVE_DELAY_MS);

@@ -24,7 +24,13 @@ const heldBoundary = (s: AppState): number | null => {
 
 function snapshotOf(s: AppState): CalcSnapshot {
   const raw = toCaseFile(s.history.present);
-  return { raw, water: s.waterSource, mcRun: currentMcAttachment(raw, s.waterSource) };
+  const doseTo = s.check.doseTo;
+  return {
+    raw,
+    water: s.waterSource,
+    doseTo,
+    mcRun: currentMcAttachment(raw, s.waterSource, doseTo),
+  };
 }
 
 /** The held boundary's neighbouring cases, read from the store when the sweep runs. */
@@ -35,6 +41,7 @@ const sweepSource: SweepSource = {
     return boundaryCandidates(s.history.present, k, aroundCm).map((doc) => ({
       raw: toCaseFile(doc),
       water: s.waterSource,
+      doseTo: s.check.doseTo,
       mcRun: null,
     }));
   },
@@ -50,7 +57,11 @@ export function useCompute(): void {
     const current = () => snapshotOf(useAppStore.getState());
     scheduler.ask(current(), { full: true, preview: false });
     const unsubscribe = useAppStore.subscribe((s, prev) => {
-      if (s.history.present !== prev.history.present || s.waterSource !== prev.waterSource) {
+      if (
+        s.history.present !== prev.history.present ||
+        s.waterSource !== prev.waterSource ||
+        s.check.doseTo !== prev.check.doseTo
+      ) {
         scheduler.ask(snapshotOf(s), { full: !dragging(s), preview: true });
         scheduler.followSweep(heldBoundary(s), sweepSource);
       }

@@ -2,6 +2,7 @@
 // a two-beam plan opened from a file and passed on through a link.
 import { expect, test, type Page } from '@playwright/test';
 import { readFileSync } from 'node:fs';
+import { pdfTextOf } from '../helpers/pdfTextOf';
 
 test.beforeEach(async ({ page }) => {
   await page.goto('/');
@@ -37,21 +38,36 @@ test('entering the planning dose and MU gives a verdict; print view and PDF reco
 }, testInfo) => {
   await openCheckWithWaterData(page);
   await expect(page.getByTestId('check-verdict')).toContainText('Not compared');
+  // The path crosses lung: the superposition decides by default, and the page says so.
+  await expect(page.getByTestId('check-deciding-method')).toContainText(
+    'default for a path that crosses a heterogeneity',
+  );
+  await expect(page.getByTestId('check-spread')).toContainText('Spread between');
 
-  // Planning dose 200 cGy at P1: the check gives the MU for it (column "check MU").
+  // Planning dose 200 cGy at P1: the check gives the MU for it (column "check MU"); with no
+  // planning MU for the beam the verdict says which number is missing.
   await page.getByTestId('plan-dose-beam-1-P1').fill('200');
   const rtmr = 'Ratio of TMR (effective depth)';
   const checkMu = Number((await rowCells(page, 'P1', rtmr))[5]);
   expect(checkMu).toBeGreaterThan(100);
+  await expect(page.getByTestId('check-verdict-statement')).toContainText(
+    'missing planning MU of beam beam-1',
+  );
 
-  // The planning system's MU 1 % above the check: within the 5 % heterogeneous tolerance.
-  await page.getByTestId('plan-mu-beam-1-P1').fill((checkMu * 1.01).toFixed(1));
+  // Decide with the ratio of TMR (chosen), then the planning system's MU for the beam 1 % above
+  // its check MU: within the 5 % heterogeneous tolerance.
+  await page.getByTestId('check-method').selectOption('rtmr');
+  await expect(page.getByTestId('check-deciding-method')).toContainText('chosen');
+  await page.getByTestId('plan-mu-beam-1').fill((checkMu * 1.01).toFixed(1));
   await expect(page.getByTestId('check-verdict')).toContainText('Within tolerance');
   expect((await rowCells(page, 'P1', rtmr))[12]).toBe('pass');
 
-  // 10 % above: outside tolerance, shown in words.
-  await page.getByTestId('plan-mu-beam-1-P1').fill((checkMu * 1.1).toFixed(1));
+  // 10 % above: outside tolerance, shown in words, naming the deciding difference once.
+  await page.getByTestId('plan-mu-beam-1').fill((checkMu * 1.1).toFixed(1));
   await expect(page.getByTestId('check-verdict')).toContainText('Outside tolerance');
+  await expect(page.getByTestId('check-verdict-statement')).toHaveText(
+    /^fail — Ratio of TMR \(effective depth\): (ΔMU −9\.\d\d|Δdose \+(9\.9\d|10\.\d\d)) % beyond ±5 % \(beam beam-1, point P1\)$/,
+  );
   expect((await rowCells(page, 'P1', rtmr))[12]).toBe('FAIL');
 
   // A wider tolerance turns it back to a pass.
@@ -77,10 +93,15 @@ test('entering the planning dose and MU gives a verdict; print view and PDF reco
   expect(download.suggestedFilename()).toMatch(/^lamina-check-\d{4}-\d{2}-\d{2}\.pdf$/);
   const pdf = readFileSync(await download.path()).toString('latin1');
   expect(pdf.startsWith('%PDF-')).toBe(true);
-  expect(pdf).toContain('(Point check per beam) Tj');
+  const pdfLines = pdfTextOf(pdf).split('\n');
+  expect(pdfLines).toContain('Point check per beam');
   // The factor chain of the water data the page used (the modelled beam by default).
-  expect(pdf).toMatch(/\(Water chain at P1: D\/MU = /);
-  expect(pdf).toContain(`(${(checkMu * 1.1).toFixed(1)}) Tj`);
+  expect(pdfLines.some((l) => l.startsWith('Water chain at P1: D/MU = '))).toBe(true);
+  expect(pdfLines).toContain((checkMu * 1.1).toFixed(1));
+  // Greek letters printed as written (embedded font), and the verdict in words (the 12 %
+  // tolerance set above makes it a pass).
+  expect(pdfLines.some((l) => l.includes('Verdict: pass — Ratio of TMR'))).toBe(true);
+  expect(pdfLines.some((l) => l.includes('ΔMU'))).toBe(true);
 
   // The figure as SVG and PNG files.
   const [svg] = await Promise.all([

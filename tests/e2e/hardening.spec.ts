@@ -221,7 +221,7 @@ test('a share link whose case name and point id are HTML opens them as text', as
     kind: 'case',
     value: {
       format: 'lamina.case',
-      version: 1,
+      version: 2,
       name: evilName,
       beam: { energy: '6MV', setup: { kind: 'SSD', ssdCm: 100 }, fieldXCm: 10, fieldYCm: 10 },
       layers: [{ materialId: 'water', thicknessCm: 20 }],

@@ -34,7 +34,7 @@ test('a finished Monte Carlo run is checked with ± 1σ and leaves the check whe
   await expect(page.getByTestId('check-point-table')).toBeVisible();
   // Planning values at P1 so the Monte Carlo gets differences and a verdict.
   await page.getByTestId('plan-dose-beam-1-P1').fill('200');
-  await page.getByTestId('plan-mu-beam-1-P1').fill('300');
+  await page.getByTestId('plan-mu-beam-1').fill('300');
   const table = page.getByTestId('check-point-table');
   await expect(table.locator('tbody tr', { hasText: 'Monte Carlo' })).not.toHaveCount(0);
   const mc = (await tableRows(page)).find((r) => r[1] === 'P1' && r[3] === 'Monte Carlo');
@@ -51,6 +51,11 @@ test('a finished Monte Carlo run is checked with ± 1σ and leaves the check whe
     (r) => r[1] === 'P1' && r[3] === 'Ratio of TMR (effective depth)',
   );
   expect(rtmr?.[4]).toMatch(/^\d\.\d{4}$/);
+  // A current run decides the check of a heterogeneous path by default, and says so.
+  await expect(page.getByTestId('check-verdict-statement')).toContainText('Monte Carlo');
+  await expect(page.getByTestId('check-deciding-method')).toContainText(
+    'default for a path that crosses a heterogeneity',
+  );
   await page.screenshot({ path: testInfo.outputPath('mc-check.png'), fullPage: true });
 
   // An edit of the case makes the run stale: the Monte Carlo row leaves the check.

@@ -63,7 +63,9 @@ test('a small run from a preset shows progress, a live 1σ and its curve in both
     0,
   );
   await openMcTab(page);
-  await expect(page.getByTestId('mc-stale')).toContainText('stale (case changed)');
+  await expect(page.getByTestId('mc-stale')).toContainText(
+    'stale (case, water data or dose convention changed)',
+  );
   await page.screenshot({ path: testInfo.outputPath('mc-stale.png'), fullPage: true });
   // Undo brings the case back: the run matches it again.
   await page.getByTestId('layer-1-thickness').fill('3');

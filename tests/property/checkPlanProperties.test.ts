@@ -25,10 +25,9 @@ function inputOf(b: BeamDraw, i: number): CheckBeamInput {
     id: `B${i}`,
     label: `B${i}`,
     weight: b.weight,
+    planningMu: b.planningMu,
     layers: [{ topCm: 0, bottomCm: 30, relativeElectronDensity: 1 }],
-    points: [
-      { id: 'P', depthCm: 10, planningMu: b.planningMu, planningDoseCGy: b.planningDoseCGy },
-    ],
+    points: [{ id: 'P', depthCm: 10, planningDoseCGy: b.planningDoseCGy }],
     methods: [{ id: 'water', label: 'water', points: [{ id: 'P', dosePerMuCGy: b.dosePerMuCGy }] }],
   };
 }

@@ -1,6 +1,7 @@
 // The point check of a plan: for every beam, point and dose method, the MU for the beam's share
-// of the prescription, the dose the planning system's MU give, their percent differences from the
-// planning values and a verdict; then the dose summed over beams at each shared point. Numbers in,
+// of the prescription, the dose the beam's planning MU give, their percent differences from the
+// planning values and a verdict; then the dose summed over beams at each shared point, the
+// deciding method, the difference that decides and the spread between methods. Numbers in,
 // numbers out: the dose per MU of each method at each point comes from the dose methods.
 import {
   quadratureSum,
@@ -11,6 +12,10 @@ import {
 } from './checkUncertainty';
 import { doseForMu, muForDose } from './monitorUnits';
 import { isHeterogeneousPath, type PathLayer } from './heterogeneousPath';
+import { decidingMethodOf, type DecidingReason } from './decidingMethod';
+import { decidingDifferenceOf, type DecidingDifference } from './decidingDifference';
+import { methodSpreadOf, type MethodSpread } from './methodSpread';
+import type { DoseQuantity } from '../dose/doseQuantity';
 import {
   percentDifference,
   toleranceFor,
@@ -22,8 +27,8 @@ import {
 export interface CheckPointInput {
   id: string;
   depthCm: number;
+  /** The planning system's dose at the point from this beam (cGy). */
   planningDoseCGy?: number | undefined;
-  planningMu?: number | undefined;
 }
 
 export interface CheckMethodInput {
@@ -42,6 +47,8 @@ export interface CheckBeamInput {
   label: string;
   /** Relative weight: the beam's share of the prescribed dose is weight / Σ weights. */
   weight: number;
+  /** The planning system's MU for this beam (one value per beam). */
+  planningMu?: number | undefined;
   layers: readonly PathLayer[];
   points: readonly CheckPointInput[];
   methods: readonly CheckMethodInput[];
@@ -56,9 +63,14 @@ export interface Prescription {
 export interface CheckOptions {
   tolerances: Tolerances;
   prescription?: Prescription | undefined;
-  /** Method whose verdict decides the plan's verdict; a preferred available method when absent. */
+  /** Method whose verdict decides the plan's verdict; the default for the path when absent. */
   decisiveMethodId?: string | undefined;
+  /** The dose convention of the methods' doses (printed with the check). */
+  doseTo?: DoseQuantity | undefined;
 }
+
+/** A number a comparison needs and does not have. */
+export type MissingValue = 'planning-mu' | 'planning-dose' | 'dose-per-mu';
 
 export interface MethodPointCheck {
   methodId: string;
@@ -86,6 +98,8 @@ export interface MethodPointCheck {
   };
   /** See verdictWithSigma: with a σ, "uncertain" when within the tolerance ± 2σ. */
   verdict: Verdict;
+  /** With verdict "none": the numbers missing for any comparison here (empty otherwise). */
+  missing: MissingValue[];
 }
 
 export interface PointCheck {
@@ -96,6 +110,7 @@ export interface PointCheck {
   /** This beam's share of the prescribed dose at this point (cGy), or null. */
   prescribedDoseCGy: number | null;
   planningDoseCGy: number | null;
+  /** The beam's planning MU (the same for every point of the beam). */
   planningMu: number | null;
   methods: MethodPointCheck[];
 }
@@ -105,7 +120,7 @@ export interface BeamCheck {
   label: string;
   weight: number;
   weightFraction: number;
-  /** The planning system's MU for the beam (prescription point first, else the first point giving one). */
+  /** The planning system's MU for the beam. */
   planningMu: number | null;
   points: PointCheck[];
   verdictByMethod: Record<string, Verdict>;
@@ -134,25 +149,26 @@ export interface TotalPointCheck {
 
 export interface PlanCheck {
   tolerances: Tolerances;
+  /** The dose convention of every dose in the check (null when the caller did not say). */
+  doseTo: DoseQuantity | null;
   prescription: Prescription | null;
   methods: { id: string; label: string }[];
   decisiveMethodId: string | null;
+  /** How the deciding method was chosen; a requested method not computed for every beam. */
+  decisiveMethodReason: DecidingReason;
+  requestedMethodUnavailable: string | null;
+  /** Some checked point's path crosses a heterogeneity. */
+  heterogeneous: boolean;
   beams: BeamCheck[];
   totals: TotalPointCheck[];
   verdictByMethod: Record<string, Verdict>;
   /** Verdict of the decisive method over every beam, point and total. */
   verdict: Verdict;
+  /** The comparison of the decisive method that gives the verdict (null when none was made). */
+  decidingDifference: DecidingDifference | null;
+  /** Range of the check's value across the correction methods where the verdict is decided. */
+  spread: MethodSpread | null;
 }
-
-/** Methods preferred to decide the verdict, in order: effective-depth methods first (AAPM TG-114 advises an effective depth when the plan is heterogeneity-corrected; from memory). */
-export const DECISIVE_METHOD_PREFERENCE: readonly string[] = [
-  'rtmr',
-  'epl-pdd',
-  'batho-modified',
-  'batho',
-  'etar',
-  'water',
-];
 
 function unionMethods(beams: readonly CheckBeamInput[]): { id: string; label: string }[] {
   const seen = new Map<string, string>();
@@ -160,11 +176,21 @@ function unionMethods(beams: readonly CheckBeamInput[]): { id: string; label: st
   return [...seen].map(([id, label]) => ({ id, label }));
 }
 
-function beamPlanningMu(beam: CheckBeamInput, prescription: Prescription | null): number | null {
-  const atRx = prescription ? beam.points.find((p) => p.id === prescription.pointId) : undefined;
-  return (
-    atRx?.planningMu ?? beam.points.find((p) => p.planningMu !== undefined)?.planningMu ?? null
-  );
+/** The numbers missing for a comparison at a point: ΔMU needs dose per MU, the beam's MU and a
+ * dose to deliver (prescription share or planning dose); Δdose needs the dose per MU, the MU and
+ * the planning dose. Listed only when neither comparison can be made. */
+function missingFor(
+  dpm: number | null,
+  mu: number | null,
+  toDeliver: number | null,
+  planningDose: number | null,
+): MissingValue[] {
+  if (dpm !== null && mu !== null && toDeliver !== null) return [];
+  const out: MissingValue[] = [];
+  if (mu === null) out.push('planning-mu');
+  if (toDeliver === null && planningDose === null) out.push('planning-dose');
+  if (dpm === null) out.push('dose-per-mu');
+  return out;
 }
 
 function checkBeam(
@@ -174,12 +200,12 @@ function checkBeam(
   options: CheckOptions,
 ): BeamCheck {
   const rx = options.prescription ?? null;
-  const beamMu = beamPlanningMu(beam, rx);
+  const beamMu = beam.planningMu ?? null;
   const points = beam.points.map((p): PointCheck => {
     const heterogeneous = isHeterogeneousPath(beam.layers, p.depthCm);
     const tolerancePercent = toleranceFor(heterogeneous, options.tolerances);
     const prescribedDoseCGy = rx && rx.pointId === p.id ? rx.doseCGy * weightFraction : null;
-    const mu = p.planningMu ?? beamMu;
+    const mu = beamMu;
     return {
       pointId: p.id,
       depthCm: p.depthCm,
@@ -190,7 +216,8 @@ function checkBeam(
       planningMu: mu,
       methods: methods.map(({ id }): MethodPointCheck => {
         const at = beam.methods.find((m) => m.id === id)?.points.find((q) => q.id === p.id);
-        const dpm = at?.dosePerMuCGy ?? null;
+        const raw = at?.dosePerMuCGy ?? null;
+        const dpm = raw !== null && Number.isFinite(raw) && raw > 0 ? raw : null;
         const sigmaDpm = at?.sigmaDosePerMuCGy;
         const toDeliver = prescribedDoseCGy ?? p.planningDoseCGy ?? null;
         const checkMu = toDeliver === null ? null : muForDose(toDeliver, dpm);
@@ -213,6 +240,7 @@ function checkBeam(
             verdictWithSigma(muDiffPercent, sigma?.muDiffPercent, tolerancePercent),
             verdictWithSigma(doseDiffPercent, sigma?.doseDiffPercent, tolerancePercent),
           ]),
+          missing: missingFor(dpm, mu, toDeliver, p.planningDoseCGy ?? null),
         };
       }),
     };
@@ -324,19 +352,30 @@ export function checkPlan(beams: readonly CheckBeamInput[], options: CheckOption
       ...totals.map((t) => t.methods[k]?.verdict ?? 'none'),
     ]);
   });
-  const available = new Set(methods.map((m) => m.id));
-  const decisiveMethodId =
-    options.decisiveMethodId !== undefined && available.has(options.decisiveMethodId)
-      ? options.decisiveMethodId
-      : (DECISIVE_METHOD_PREFERENCE.find((id) => available.has(id)) ?? methods[0]?.id ?? null);
-  return {
+  const heterogeneous = beamChecks.some((b) => b.points.some((p) => p.heterogeneous));
+  const deciding = decidingMethodOf(
+    beams.map((b) =>
+      b.methods.filter((m) => m.points.some((p) => p.dosePerMuCGy !== null)).map((m) => m.id),
+    ),
+    heterogeneous,
+    options.decisiveMethodId || undefined,
+  );
+  const decisiveMethodId = deciding.id;
+  const partial = {
     tolerances: { ...options.tolerances },
+    doseTo: options.doseTo ?? null,
     prescription: options.prescription ?? null,
     methods,
     decisiveMethodId,
+    decisiveMethodReason: deciding.reason,
+    requestedMethodUnavailable: deciding.requestedUnavailable,
+    heterogeneous,
     beams: beamChecks,
     totals,
     verdictByMethod,
-    verdict: decisiveMethodId === null ? 'none' : (verdictByMethod[decisiveMethodId] ?? 'none'),
+    verdict:
+      decisiveMethodId === null ? ('none' as const) : (verdictByMethod[decisiveMethodId] ?? 'none'),
   };
+  const decidingDifference = decidingDifferenceOf(partial);
+  return { ...partial, decidingDifference, spread: methodSpreadOf(partial, decidingDifference) };
 }

@@ -23,7 +23,7 @@ export const DEFAULT_TOLERANCES: Readonly<Tolerances> = {
 
 /**
  * Percent difference of the check value from the planning system's value:
- * 100 · (check − planning) / planning. Null when either is missing or the planning value is 0.
+ * 100 · (check − planning) / planning. Null when either is missing, the planning value is 0 or the quotient overflows.
  */
 export function percentDifference(
   checkValue: number | null | undefined,
@@ -33,7 +33,8 @@ export function percentDifference(
   if (planningValue === null || planningValue === undefined || !Number.isFinite(planningValue))
     return null;
   if (planningValue === 0) return null;
-  return (100 * (checkValue - planningValue)) / planningValue;
+  const d = (100 * (checkValue - planningValue)) / planningValue;
+  return Number.isFinite(d) ? d : null;
 }
 
 /** Pass when |difference| ≤ tolerance; "none" when there is nothing to compare. */

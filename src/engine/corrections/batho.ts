@@ -1,6 +1,8 @@
 // Generalized Batho power law (Batho 1964; Sontag & Cunningham 1977; multi-layer form as in Webb &
 // Fox 1980; all from memory):
-//   CF = [(μ_en/ρ)_N/(μ_en/ρ)_w] · Π_{m=1..N} T(X_m + shift, s_d)^(ρ_m − ρ_{m−1}),
+//   CF = Π_{m=1..N} T(X_m + shift, s_d)^(ρ_m − ρ_{m−1})   (dose to water; the published
+// form's factor (μ_en/ρ)_N/(μ_en/ρ)_w for dose to medium is applied by dose/doseConversion.ts,
+// the same for every type-A method),
 // X_m = d − z_top,m, ρ = relative electron density (exponents by ρ_e, for Compton-dominated beams
 // μ_m/μ_w ≈ ρ_e,m), with the convention μ₀ ≡ μ_w (ρ₀ = 1) so homogeneous water gives CF = 1.
 import type { LookupRecorder, WaterData } from '../beam/waterData';
@@ -8,7 +10,6 @@ import { layerIndexAtDepth, type SlabLayer, type SlabPhantom } from '../phantom/
 import {
   checkedCf,
   collectingRecorder,
-  type CorrectionOptions,
   type CorrectionResult,
   type TypeAMethod,
 } from './correctionTypes';
@@ -36,18 +37,6 @@ export function bathoPowerLawProduct(
   return { product, smallestDistanceCm: smallest };
 }
 
-/** Dose-to-medium factor of the layer holding the point (1 = dose to water). */
-export function muEnFactor(
-  phantom: SlabPhantom,
-  pointDepthCm: number,
-  options: CorrectionOptions,
-): number {
-  if (!options.muEnRatioOfLayer) return 1;
-  return options.muEnRatioOfLayer(
-    phantom.layers[layerIndexAtDepth(phantom, pointDepthCm)] as SlabLayer,
-  );
-}
-
 function depthFunctionOf(
   wd: WaterData,
   sideAtDepthCm: number,
@@ -62,7 +51,7 @@ export const bathoMethod: TypeAMethod = {
   id: 'batho',
   label: 'Batho power law (generalized)',
   variant: (o) =>
-    `${(o.bathoTable ?? 'tmr').toUpperCase()}, no shift, μ₀ ≡ water, exponents by ρ_e, ${o.muEnRatioOfLayer ? 'dose to medium' : 'dose to water'}`,
+    `${(o.bathoTable ?? 'tmr').toUpperCase()}, no shift, μ₀ ≡ water, exponents by ρ_e`,
   usesPsf: (o) => o.bathoTable === 'tar',
   correct(phantom, pointDepthCm, sideAtDepthCm, wd, options): CorrectionResult {
     const { recorder, flags } = collectingRecorder();
@@ -73,6 +62,6 @@ export const bathoMethod: TypeAMethod = {
       out.push(
         `unshifted Batho: ${smallestDistanceCm.toFixed(2)} cm from an interface < d_max (power law in the build-up region)`,
       );
-    return checkedCf(product * muEnFactor(phantom, pointDepthCm, options), out);
+    return checkedCf(product, out);
   },
 };

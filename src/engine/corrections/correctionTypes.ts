@@ -2,7 +2,7 @@
 // phantom, the point's geometric depth, the field side at that depth and the water data.
 import type { MethodId } from '../methodRegistry';
 import type { ExtrapolationFlag, LookupRecorder, WaterData } from '../beam/waterData';
-import type { SlabLayer, SlabPhantom } from '../phantom/slabPhantom';
+import type { SlabPhantom } from '../phantom/slabPhantom';
 
 /** Relative scatter weight of each layer for a point (ETAR's ρ̃); one entry per layer. */
 export type ScatterWeightFunction = (
@@ -16,11 +16,6 @@ export interface CorrectionOptions {
   ssdCm?: number | undefined;
   /** Batho depth function: TMR (default) or TAR = TMR·PSF. */
   bathoTable?: 'tmr' | 'tar' | undefined;
-  /**
-   * (μ_en/ρ)_N/(μ_en/ρ)_w for the layer holding the point (Batho forms). Absent: dose to water
-   * (ratio 1).
-   */
-  muEnRatioOfLayer?: ((layer: SlabLayer) => number) | undefined;
   /** ETAR: a fixed effective density ρ̃ entered by the user (teaching); wins over weights. */
   etarRhoTilde?: number | undefined;
   /** ETAR: layer weights for ρ̃; the analytic exponential-kernel weighting when absent. */

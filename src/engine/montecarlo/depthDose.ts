@@ -1,13 +1,7 @@
-// From energy per history in depth bins to dose per unit fluence, with the inverse-square fall of
-// a divergent beam's fluence, optional dose to water, and the depth of maximum dose.
+// From energy per history in depth bins to dose per unit fluence (dose to medium), with the
+// inverse-square fall of a divergent beam's fluence, and the depth of maximum dose.
 import { FIELD_DEFINITION_DISTANCE_CM } from '../beam/geometry';
-import {
-  makeSlabPhantom,
-  cumulativeMassThicknessGPerCm2,
-  layerIndexAtDepth,
-  type SlabLayer,
-} from '../phantom/slabPhantom';
-import { collisionStoppingPowerMeVCm2PerG } from '../materials/electronStopping';
+import { makeSlabPhantom, cumulativeMassThicknessGPerCm2 } from '../phantom/slabPhantom';
 import type { McScenario, ScoringGrid } from './scenario';
 import type { BinStatistics } from './batchStatistics';
 
@@ -25,15 +19,12 @@ export interface McDepthDose {
 /**
  * Dose per fluence Φ₁₀₀ (photons/cm² at 100 cm; at the surface for a parallel beam): D = E/(m/A) × (100/(SSD + z))², with E the
  * energy per history in the bin's aperture column and m/A its mass per area (exact across
- * interfaces). With `toWater`, dose to medium is converted by the water/medium collision
- * stopping-power ratio at `electronEnergyMeV` (Siebers et al., PMB 45, 983 (2000), with one
- * representative electron energy instead of the full spectrum).
+ * interfaces): dose to medium. Dose to water is converted from it by dose/doseConversion.ts.
  */
 export function depthDoseFromStatistics(
   scenario: McScenario,
   grid: ScoringGrid,
   stats: BinStatistics,
-  toWater?: { electronEnergyMeV: number },
 ): McDepthDose {
   const phantom = makeSlabPhantom(scenario.layers);
   const dz = grid.depthBinCm;
@@ -49,14 +40,7 @@ export function depthDoseFromStatistics(
       cumulativeMassThicknessGPerCm2(phantom, top);
     const zc = (i + 0.5) * dz;
     const isq = scenario.parallel ? 1 : (FIELD_DEFINITION_DISTANCE_CM / (scenario.ssdCm + zc)) ** 2;
-    let factor = (GRAY_PER_MEV_PER_G * isq) / massPerArea;
-    if (toWater) {
-      const layer = phantom.layers[layerIndexAtDepth(phantom, zc)] as SlabLayer;
-      const id = layer.materialId;
-      const t = toWater.electronEnergyMeV;
-      factor *=
-        collisionStoppingPowerMeVCm2PerG('water', t) / collisionStoppingPowerMeVCm2PerG(id, t);
-    }
+    const factor = (GRAY_PER_MEV_PER_G * isq) / massPerArea;
     dose.push((stats.mean[i] as number) * factor);
     sigma.push((stats.sigma[i] as number) * factor);
   }

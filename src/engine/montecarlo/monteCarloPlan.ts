@@ -6,6 +6,7 @@
 import type { BeamEnergy } from '../beam/energies';
 import { ssdCmOf, type Setup } from '../beam/geometry';
 import type { LayerSpec } from '../phantom/slabPhantom';
+import type { DoseQuantity } from '../dose/doseQuantity';
 import type { TransportOptions } from './transport';
 import { DEFAULT_BINNING, type McBinning, type McScenario } from './scenario';
 
@@ -23,8 +24,8 @@ export interface McOptions {
   batches?: number;
   /** Nominal depth-bin width (cm); default 0.25. */
   depthBinCm?: number;
-  /** Report dose to water instead of dose to medium. */
-  doseToWater?: boolean;
+  /** Dose to medium (scored, the default) or dose to water (converted by dose/doseConversion.ts). */
+  doseTo?: DoseQuantity;
   /** cGy per MU at d_max for 10 × 10 cm², SSD 100 (default 1). */
   referenceDosePerMuCGy?: number;
   /**

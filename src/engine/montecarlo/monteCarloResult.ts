@@ -18,6 +18,7 @@ import type { McPlan } from './monteCarloPlan';
 import { scoringGrid, type ScoringGrid } from './scenario';
 import { makeSpectrumSampler } from './spectrumSampler';
 import type { EnergyTally } from './transport';
+import { convertMethodDose, depthConversionFactors } from '../dose/doseConversion';
 
 /** Planar dose (x across the field, z down the central axis), dose per MU. */
 export interface McPlane {
@@ -45,30 +46,19 @@ export interface McResult {
   energyBalance: EnergyTally;
 }
 
-/** Representative electron kinetic energy for the water/medium stopping-power ratio (MeV). */
-function representativeElectronEnergyMeV(plan: McPlan): number {
-  // About a third of the mean photon energy: mean Compton transfer (0.44–0.53 of E at 1–2 MeV,
-  // Klein–Nishina) averaged over the slowing-down spectrum; the ratio varies slowly with energy.
-  const s = plan.scenarios[plan.roles.case];
-  return s ? makeSpectrumSampler(s.energy).meanEnergyMeV / 3 : 0.5;
-}
-
 export function finalizeMonteCarlo(
   plan: McPlan,
   accumulators: readonly BatchAccumulator[],
   depthGridCm: readonly number[],
 ): McResult {
   const opts = plan.options;
-  const toWater = opts.doseToWater
-    ? { electronEnergyMeV: representativeElectronEnergyMeV(plan) }
-    : undefined;
+  const doseTo = opts.doseTo ?? 'medium';
   const dd = (i: number): McDepthDose => {
     const s = plan.scenarios[i]!;
     return depthDoseFromStatistics(
       s,
       scoringGrid(s, plan.binning),
       accumulators[i]!.caxStatistics(),
-      toWater,
     );
   };
   const caseDd = dd(plan.roles.case);
@@ -105,13 +95,12 @@ export function finalizeMonteCarlo(
   const histories = acc.histories;
   const spectrum = makeSpectrumSampler(caseScenario.energy);
   const finite = (v: number): number | null => (Number.isFinite(v) ? v : null);
-  const method: MethodResult = {
+  const scored: MethodResult = {
     id: 'monte-carlo',
     label: 'Monte Carlo',
     variant: [
       `${binCm.toFixed(3)} cm depth bins`,
       'central axis from laterally integrated pencil deposits over the field projected to each depth (reciprocity), inverse-square fluence',
-      opts.doseToWater ? 'dose to water (stopping-power ratio)' : 'dose to medium',
       'CF against a Monte Carlo water run with the same set-up',
       `dose/MU calibrated by a water run 10 × 10 cm², SSD 100, d_max ${max.depthCm.toFixed(2)} cm = ${refRate} cGy/MU`,
       `S_c = ${sc}`,
@@ -146,7 +135,24 @@ export function finalizeMonteCarlo(
       };
     }),
   };
+  // Scored as dose to medium; dose to water through the one conversion module.
+  const method = convertMethodDose(scored, doseTo, phantom, caseScenario.energy);
   const grid = scoringGrid(caseScenario, plan.binning);
+  const plane = planeOf(grid, acc.lateralMean(), phantom, caseScenario.ssdCm, muPerFluence);
+  const rowFactors = depthConversionFactors(
+    method.id,
+    doseTo,
+    phantom,
+    caseScenario.energy,
+    plane.depthCm,
+  );
+  const pointFactors = depthConversionFactors(
+    method.id,
+    doseTo,
+    phantom,
+    caseScenario.energy,
+    pointDepths,
+  );
   return {
     method,
     histories,
@@ -156,14 +162,20 @@ export function finalizeMonteCarlo(
     depthDose: { case: caseDd, water: waterDd, reference: refDd },
     referenceDMaxCm: max.depthCm,
     muPerFluence,
+    // CF at each point in the same convention as the method (the measured-table calibration
+    // multiplies it by the table's water dose per MU).
     pointCf: plan.points.map((_, i) => {
       const cfi = cfPoints.value[i] as number;
       const sigma = cfPoints.sigma[i] as number;
+      const k = pointFactors[i] ?? 1;
       return Number.isFinite(cfi) && Number.isFinite(sigma)
-        ? { cf: cfi, sigmaCf: sigma }
+        ? { cf: cfi * k, sigmaCf: sigma * k }
         : { cf: null, sigmaCf: 0 };
     }),
-    plane: planeOf(grid, acc.lateralMean(), phantom, caseScenario.ssdCm, muPerFluence),
+    plane: {
+      ...plane,
+      dosePerMuCGy: plane.dosePerMuCGy.map((row, i) => row.map((v) => v * (rowFactors[i] ?? 1))),
+    },
     energyBalance: acc.energy(),
   };
 }

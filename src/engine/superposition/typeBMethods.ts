@@ -6,6 +6,8 @@ import { radiologicalDepthCm, waterPhantom, type SlabPhantom } from '../phantom/
 import { KERNEL_FORMAT_DATE_OF_DATA, typeBModel } from './beamModel';
 import { typeBDosePerMu, referencePoint, type TypeBEngine } from './typeBDose';
 import type { SlabBeam } from './slabSuperposition';
+import { depthConversionFactors, nativeDoseQuantity } from '../dose/doseConversion';
+import type { DoseQuantity } from '../dose/doseQuantity';
 
 export interface TypeBInput {
   energy: BeamEnergy;
@@ -96,6 +98,8 @@ export interface DosePlaneOptions {
   halfWidthCm?: number;
   /** Depths of the lateral profiles (cm). */
   profileDepthsCm?: readonly number[];
+  /** Dose to medium (native) or dose to water (dose/doseConversion.ts), per depth row. */
+  doseTo?: DoseQuantity;
 }
 
 function grid(from: number, to: number, step: number): number[] {
@@ -131,14 +135,20 @@ export function typeBDosePlane(
     profileDepths.length > 0
       ? typeBDosePerMu(method, energy, phantom, beam, profileDepths, lateralCm)
       : new Float64Array(0);
+  const to = options.doseTo ?? nativeDoseQuantity(method);
+  const rowFactor = depthConversionFactors(method, to, phantom, energy, depthCm);
+  const profileFactor = depthConversionFactors(method, to, phantom, energy, profileDepths);
   return {
     method,
     depthCm,
     lateralCm,
-    dosePerMuCGy: rows,
+    dosePerMuCGy: rows.map((row, iz) => row.map((v) => v * (rowFactor[iz] ?? 1))),
     profiles: profileDepths.map((d, k) => ({
       depthCm: d,
-      dosePerMuCGy: Array.from(profileDose.subarray(k * nx, (k + 1) * nx)),
+      dosePerMuCGy: Array.from(
+        profileDose.subarray(k * nx, (k + 1) * nx),
+        (v) => v * (profileFactor[k] ?? 1),
+      ),
     })),
   };
 }

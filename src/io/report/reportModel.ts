@@ -7,6 +7,8 @@ import type { PlanCheck } from '../../engine/check/planCheck';
 import type { Verdict } from '../../engine/check/tolerance';
 import type { LaminaPlan } from '../planFile';
 import { monteCarloRecordLines } from './monteCarloNote';
+import { decidingMethodText, spreadStatement, verdictStatement } from './verdictStatement';
+import { doseQuantityLabel } from '../../engine/dose/doseQuantity';
 import { depthDoseFigure, type ReportFigure } from './reportFigure';
 import {
   beamVerdictHeaders,
@@ -54,7 +56,7 @@ export const VERDICT_TEXT: Record<Verdict, string> = {
   fail: 'OUTSIDE tolerance',
   uncertain:
     'UNCERTAIN: within the tolerance ± 2σ of the Monte Carlo statistics (run more histories)',
-  none: 'not compared (no planning value)',
+  none: 'not compared (a planning value is missing)',
 };
 
 export function isoDate(d: Date): string {
@@ -143,6 +145,13 @@ function beamBlocks(
         }),
       ),
     });
+  const doseLines = report.methods
+    .filter((m) => m.dose)
+    .map((m) => `${m.label}: ${doseQuantityLabel(m.dose!.quantity)} — ${m.dose!.conversion}`);
+  if (doseLines.length > 0) {
+    out.push({ kind: 'paragraph', text: `Dose convention of each method, beam ${beamId}:` });
+    out.push({ kind: 'list', items: doseLines });
+  }
   for (const [pointId, f] of Object.entries(chains ?? {}))
     out.push({ kind: 'paragraph', text: `Water chain at ${pointId}: ${f.formula}` });
   out.push({ kind: 'figure', figure: depthDoseFigure(report, `Depth dose, beam ${beamId}`) });
@@ -156,9 +165,16 @@ export function fmt(v: number | null | undefined, digits: number): string {
   return v === null || v === undefined || !Number.isFinite(v) ? '—' : v.toFixed(digits);
 }
 
-function checkSummary(check: PlanCheck): string {
-  const m = check.methods.find((x) => x.id === check.decisiveMethodId);
-  return `Verdict (${m ? m.label : 'no method'}): ${VERDICT_TEXT[check.verdict]}. Tolerances: ${check.tolerances.homogeneousPercent} % (homogeneous path), ${check.tolerances.heterogeneousPercent} % (heterogeneous path).`;
+function checkSummary(check: PlanCheck): ReportBlock[] {
+  return [
+    { kind: 'paragraph', text: `Verdict: ${verdictStatement(check)}.` },
+    { kind: 'paragraph', text: `Deciding method: ${decidingMethodText(check)}.` },
+    { kind: 'paragraph', text: spreadStatement(check) },
+    {
+      kind: 'paragraph',
+      text: `Tolerances: ${check.tolerances.homogeneousPercent} % (homogeneous path), ${check.tolerances.heterogeneousPercent} % (heterogeneous path).${check.doseTo ? ` Dose reported as ${doseQuantityLabel(check.doseTo)} by every method (conversions in the methods table).` : ''}`,
+    },
+  ];
 }
 
 export function buildReportModel(input: ReportInput): ReportModel {
@@ -174,7 +190,7 @@ export function buildReportModel(input: ReportInput): ReportModel {
       kind: 'paragraph',
       text: `Prescription: ${check.prescription.doseCGy} cGy at point ${check.prescription.pointId} (all beams).`,
     });
-  blocks.push({ kind: 'paragraph', text: checkSummary(check) });
+  blocks.push(...checkSummary(check));
   blocks.push({
     kind: 'table',
     caption: 'Verdict per beam and method',

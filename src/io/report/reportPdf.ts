@@ -1,10 +1,31 @@
-// Writes a report model as an A4 PDF with jsPDF: tables that wrap and break across pages with
-// their header repeated, the depth-dose figure as vector lines, and a footer on every page.
-// jsPDF is imported lazily so it stays out of the page's main chunk.
+// Writes a report model as an A4 PDF with jsPDF: text in an embedded DejaVu Sans subset (Greek
+// and the mathematical signs print as written), tables that wrap and break across pages with
+// their header repeated and header words never split, the depth-dose figure as vector lines, the
+// signature kept on a page with the text before it, and a footer on every page. jsPDF and the
+// font are imported lazily, when a PDF is made, so they stay out of the page's main chunk.
 import type { jsPDF as JsPdf } from 'jspdf';
 import type { ReportBlock, ReportModel } from './reportModel';
 import type { ReportFigure } from './reportFigure';
 import { pdfText } from './pdfText';
+
+/** The embedded font's family name in the PDF. */
+export const REPORT_FONT = 'DejaVuSans';
+
+export interface ReportFonts {
+  normalBase64: string;
+  boldBase64: string;
+}
+
+function registerFonts(doc: JsPdf, fonts: ReportFonts): void {
+  doc.addFileToVFS('DejaVuSans-Lamina.ttf', fonts.normalBase64);
+  doc.addFont('DejaVuSans-Lamina.ttf', REPORT_FONT, 'normal');
+  doc.addFileToVFS('DejaVuSans-Bold-Lamina.ttf', fonts.boldBase64);
+  doc.addFont('DejaVuSans-Bold-Lamina.ttf', REPORT_FONT, 'bold');
+}
+
+function setFont(doc: JsPdf, style: 'normal' | 'bold'): void {
+  doc.setFont(REPORT_FONT, style);
+}
 
 const PAGE = { width: 210, height: 297, margin: 14 };
 const CONTENT_WIDTH = PAGE.width - 2 * PAGE.margin;
@@ -35,11 +56,23 @@ function ensureRoom(doc: JsPdf, c: Cursor, heightMm: number): void {
   }
 }
 
-function writeLines(doc: JsPdf, c: Cursor, text: string, sizePt: number, style = 'normal'): void {
-  doc.setFont('helvetica', style);
+function linesOf(doc: JsPdf, text: string, sizePt: number, style: 'normal' | 'bold'): string[] {
+  setFont(doc, style);
   doc.setFontSize(sizePt);
-  const lines = doc.splitTextToSize(pdfText(text), CONTENT_WIDTH) as string[];
-  const lh = sizePt * PT_TO_MM * 1.3;
+  return doc.splitTextToSize(pdfText(text), CONTENT_WIDTH) as string[];
+}
+
+const lineHeightMm = (sizePt: number) => sizePt * PT_TO_MM * 1.3;
+
+function writeLines(
+  doc: JsPdf,
+  c: Cursor,
+  text: string,
+  sizePt: number,
+  style: 'normal' | 'bold' = 'normal',
+): void {
+  const lines = linesOf(doc, text, sizePt, style);
+  const lh = lineHeightMm(sizePt);
   for (const line of lines) {
     ensureRoom(doc, c, lh);
     doc.text(line, PAGE.margin, c.y + sizePt * PT_TO_MM);
@@ -47,36 +80,68 @@ function writeLines(doc: JsPdf, c: Cursor, text: string, sizePt: number, style =
   }
 }
 
-function writeTable(doc: JsPdf, c: Cursor, block: Extract<ReportBlock, { kind: 'table' }>): void {
-  if (block.caption) writeLines(doc, c, block.caption, 8, 'bold');
-  const sizePt = block.headers.length > 9 ? 6 : 7;
-  const lh = sizePt * PT_TO_MM * 1.25;
-  const pad = 1.2;
+const CELL_PAD_MM = 1.2;
+
+/**
+ * Column widths (mm) that fit the page: each column at least as wide as the longest word of its
+ * bold header (headers wrap between words only), the widest columns shrunk (their cells wrap)
+ * until the table fits. Null when even the header words do not fit at this size.
+ */
+export function tableColumnWidths(
+  doc: JsPdf,
+  headers: readonly string[],
+  rows: readonly (readonly string[])[],
+  sizePt: number,
+  widthMm = CONTENT_WIDTH,
+): number[] | null {
+  const extra = 2 * CELL_PAD_MM + 0.8;
   doc.setFontSize(sizePt);
-  doc.setFont('helvetica', 'normal');
+  setFont(doc, 'bold');
+  const headerWidth = headers.map((h) => doc.getTextWidth(h));
+  const minimum = headers.map(
+    (h) => Math.max(0, ...h.split(/\s+/).map((w) => doc.getTextWidth(w))) + extra,
+  );
+  setFont(doc, 'normal');
+  const natural = headers.map((_, i) =>
+    Math.max(
+      minimum[i] as number,
+      (headerWidth[i] as number) + extra,
+      ...rows.map((r) => doc.getTextWidth(r[i] ?? '') + extra),
+    ),
+  );
+  if (minimum.reduce((s, w) => s + w, 0) > widthMm) return null;
+  if (natural.reduce((s, w) => s + w, 0) <= widthMm) return natural;
+  // Cap the widest columns at a common width (never below a column's minimum), raising the cap
+  // until the table fills the page.
+  const widthsAt = (cap: number) =>
+    natural.map((w, i) => Math.min(w, Math.max(cap, minimum[i] as number)));
+  let lo = 0;
+  let hi = Math.max(...natural);
+  for (let k = 0; k < 60; k++) {
+    const mid = (lo + hi) / 2;
+    if (widthsAt(mid).reduce((s, w) => s + w, 0) > widthMm) hi = mid;
+    else lo = mid;
+  }
+  return widthsAt(lo);
+}
+
+function writeTable(doc: JsPdf, c: Cursor, block: Extract<ReportBlock, { kind: 'table' }>): void {
   const headers = block.headers.map(pdfText);
   const rows = block.rows.map((r) => r.map(pdfText));
-  const natural = headers.map(
-    (h, i) =>
-      Math.max(doc.getTextWidth(h), ...rows.map((r) => doc.getTextWidth(r[i] ?? ''))) +
-      2 * pad +
-      0.8,
-  );
-  const total = natural.reduce((s, w) => s + w, 0);
-  // Shrink only the widest columns (wrapping their text) until the table fits the page.
-  let widths = natural;
-  if (total > CONTENT_WIDTH) {
-    let cap = CONTENT_WIDTH / natural.length;
-    for (let k = 0; k < 40; k++) {
-      const capped = natural.map((w) => Math.min(w, cap));
-      const rest = CONTENT_WIDTH - capped.reduce((s, w) => s + w, 0);
-      if (rest <= 0.5) break;
-      cap += rest / Math.max(1, natural.filter((w) => w > cap).length);
-    }
-    widths = natural.map((w) => Math.min(w, cap));
+  // The largest size (7 pt, 6 pt for wide tables) at which the header words fit, down to 3 pt
+  // (a last resort for very many columns; the record's own tables fit at 6–7 pt).
+  let sizePt = block.headers.length > 9 ? 6 : 7;
+  let fitted = tableColumnWidths(doc, headers, rows, sizePt);
+  while (!fitted && sizePt > 3) {
+    sizePt -= 0.5;
+    fitted = tableColumnWidths(doc, headers, rows, sizePt);
   }
+  const widths = fitted ?? headers.map(() => CONTENT_WIDTH / Math.max(1, headers.length));
+  const lh = sizePt * PT_TO_MM * 1.25;
+  const pad = CELL_PAD_MM;
+  doc.setFontSize(sizePt);
   const drawRow = (cells: string[], bold: boolean) => {
-    doc.setFont('helvetica', bold ? 'bold' : 'normal');
+    setFont(doc, bold ? 'bold' : 'normal');
     const wrapped = cells.map(
       (t, i) => doc.splitTextToSize(t, (widths[i] ?? 10) - 2 * pad) as string[],
     );
@@ -84,7 +149,7 @@ function writeTable(doc: JsPdf, c: Cursor, block: Extract<ReportBlock, { kind: '
     return { wrapped, h };
   };
   const paint = (row: { wrapped: string[][]; h: number }, bold: boolean) => {
-    doc.setFont('helvetica', bold ? 'bold' : 'normal');
+    setFont(doc, bold ? 'bold' : 'normal');
     let x = PAGE.margin;
     row.wrapped.forEach((lines, i) => {
       lines.forEach((line, k) => doc.text(line, x + pad, c.y + (k + 1) * lh - 0.4));
@@ -95,7 +160,13 @@ function writeTable(doc: JsPdf, c: Cursor, block: Extract<ReportBlock, { kind: '
     doc.line(PAGE.margin, c.y, PAGE.margin + widths.reduce((s, w) => s + w, 0), c.y);
   };
   const head = drawRow(headers, true);
-  ensureRoom(doc, c, head.h * 2);
+  // The caption, the header and a first row start on the same page.
+  const captionMm = block.caption
+    ? linesOf(doc, block.caption, 8, 'bold').length * lineHeightMm(8)
+    : 0;
+  ensureRoom(doc, c, captionMm + head.h * 2);
+  if (block.caption) writeLines(doc, c, block.caption, 8, 'bold');
+  doc.setFontSize(sizePt);
   paint(head, true);
   for (const r of rows) {
     const row = drawRow(r, false);
@@ -122,7 +193,7 @@ function writeFigure(doc: JsPdf, c: Cursor, fig: ReportFigure): void {
   doc.setDrawColor(0);
   doc.setLineWidth(0.2);
   doc.rect(box.x, box.y, box.w, box.h);
-  doc.setFont('helvetica', 'normal');
+  setFont(doc, 'normal');
   doc.setFontSize(6);
   for (const t of fig.xTicks) {
     doc.line(px(t), box.y + box.h, px(t), box.y + box.h + 1);
@@ -197,7 +268,7 @@ function writeBlock(doc: JsPdf, c: Cursor, block: ReportBlock): void {
       writeFigure(doc, c, block.figure);
       break;
     case 'signature':
-      ensureRoom(doc, c, 8 + block.lines.length * 10);
+      ensureRoom(doc, c, signatureHeightMm(block.lines.length));
       c.y += 6;
       for (const line of block.lines) {
         writeLines(doc, c, line, 9);
@@ -207,17 +278,74 @@ function writeBlock(doc: JsPdf, c: Cursor, block: ReportBlock): void {
   }
 }
 
+const signatureHeightMm = (lines: number) => 6 + lines * (lineHeightMm(9) + 5);
+
+/** Height (mm) a text block takes (headings, paragraphs, lists), as writeBlock lays it out. */
+function textBlockHeightMm(doc: JsPdf, block: ReportBlock): number | null {
+  switch (block.kind) {
+    case 'heading':
+      return 3 + linesOf(doc, block.text, 11, 'bold').length * lineHeightMm(11);
+    case 'paragraph':
+      return 1 + linesOf(doc, block.text, 8.5, 'normal').length * lineHeightMm(8.5);
+    case 'list':
+      return (
+        1 +
+        block.items.reduce((s, i) => s + linesOf(doc, `• ${i}`, 8, 'normal').length, 0) *
+          lineHeightMm(8)
+      );
+    case 'signature':
+      return signatureHeightMm(block.lines.length);
+    default:
+      return null;
+  }
+}
+
+/**
+ * Index of the first block that must share the signature's page: the run of text blocks before
+ * the signature, back to its heading (e.g. the cautions), when together they fit on one page.
+ * A signature never stands alone on a page.
+ */
+function signatureGroupStart(blocks: readonly ReportBlock[]): number {
+  const sig = blocks.findIndex((b) => b.kind === 'signature');
+  if (sig < 0) return -1;
+  let start = sig;
+  for (let i = sig - 1; i >= 0; i--) {
+    const b = blocks[i] as ReportBlock;
+    if (b.kind !== 'heading' && b.kind !== 'paragraph' && b.kind !== 'list') break;
+    start = i;
+    if (b.kind === 'heading') break;
+  }
+  return start;
+}
+
 /** Lay the model out on a new jsPDF document. */
-export function writeReportPdf(model: ReportModel, JsPdfClass: typeof JsPdf): JsPdf {
+export function writeReportPdf(
+  model: ReportModel,
+  JsPdfClass: typeof JsPdf,
+  fonts: ReportFonts,
+): JsPdf {
   const doc = new JsPdfClass({ unit: 'mm', format: 'a4', compress: false });
+  registerFonts(doc, fonts);
   doc.setProperties({ title: pdfText(model.title), creator: `Lamina ${model.appVersion}` });
   const c: Cursor = { y: PAGE.margin };
   writeLines(doc, c, model.title, 14, 'bold');
-  for (const block of model.blocks) writeBlock(doc, c, block);
+  const keepFrom = signatureGroupStart(model.blocks);
+  model.blocks.forEach((block, i) => {
+    if (i === keepFrom) {
+      // The signature and the text before it start a page together when they do not fit here.
+      const group = model.blocks.slice(
+        keepFrom,
+        model.blocks.findIndex((b) => b.kind === 'signature') + 1,
+      );
+      const h = group.reduce((s, b) => s + (textBlockHeightMm(doc, b) ?? 0), 0);
+      if (h <= BOTTOM - PAGE.margin) ensureRoom(doc, c, h);
+    }
+    writeBlock(doc, c, block);
+  });
   const pages = doc.getNumberOfPages();
   for (let i = 1; i <= pages; i++) {
     doc.setPage(i);
-    doc.setFont('helvetica', 'normal');
+    setFont(doc, 'normal');
     doc.setFontSize(7);
     doc.setTextColor(90);
     doc.text(
@@ -232,14 +360,26 @@ export function writeReportPdf(model: ReportModel, JsPdfClass: typeof JsPdf): Js
   return doc;
 }
 
-/** The PDF as bytes (jsPDF loaded on first use). */
+/** jsPDF and the embedded font, loaded on first use (separate chunks of the page). */
+async function loadPdfTools(): Promise<{ jsPDF: typeof JsPdf; fonts: ReportFonts }> {
+  const [{ jsPDF }, font] = await Promise.all([
+    import('jspdf'),
+    import('./fonts/dejaVuSansSubset'),
+  ]);
+  return {
+    jsPDF,
+    fonts: { normalBase64: font.DEJAVU_SANS_BASE64, boldBase64: font.DEJAVU_SANS_BOLD_BASE64 },
+  };
+}
+
+/** The PDF as bytes. */
 export async function reportPdfBytes(model: ReportModel): Promise<ArrayBuffer> {
-  const { jsPDF } = await import('jspdf');
-  return writeReportPdf(model, jsPDF).output('arraybuffer');
+  const { jsPDF, fonts } = await loadPdfTools();
+  return writeReportPdf(model, jsPDF, fonts).output('arraybuffer');
 }
 
 /** Save the PDF through the browser's download (file name from the model). */
 export async function downloadReportPdf(model: ReportModel): Promise<void> {
-  const { jsPDF } = await import('jspdf');
-  writeReportPdf(model, jsPDF).save(model.fileName);
+  const { jsPDF, fonts } = await loadPdfTools();
+  writeReportPdf(model, jsPDF, fonts).save(model.fileName);
 }

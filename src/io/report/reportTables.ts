@@ -1,5 +1,17 @@
 // The point-check tables as text rows, shared by the printed record, the CLI and the page.
-import type { PlanCheck } from '../../engine/check/planCheck';
+import type { MethodPointCheck, PlanCheck } from '../../engine/check/planCheck';
+
+const MISSING_SHORT: Record<MethodPointCheck['missing'][number], string> = {
+  'planning-mu': 'plan MU',
+  'planning-dose': 'plan dose',
+  'dose-per-mu': 'D/MU',
+};
+
+/** The verdict cell: the verdict, or for "none" which numbers were missing ("none: no plan MU"). */
+function verdictCell(m: MethodPointCheck): string {
+  if (m.verdict !== 'none' || m.missing.length === 0) return m.verdict;
+  return `none: no ${m.missing.map((k) => MISSING_SHORT[k]).join(', ')}`;
+}
 
 const f = (v: number | null | undefined, digits: number): string =>
   v === null || v === undefined || !Number.isFinite(v) ? '—' : v.toFixed(digits);
@@ -51,7 +63,7 @@ export function pointTableRows(check: PlanCheck): string[][] {
           f(p.planningDoseCGy, 1),
           pm(signed(m.doseDiffPercent), s?.doseDiffPercent, 2, has),
           String(p.tolerancePercent),
-          m.verdict,
+          verdictCell(m),
         ];
       }),
     ),

@@ -1,8 +1,10 @@
 // The point check's own inputs (a slice of the page's one store, src/state/store.ts): the extra
-// beams of a multi-beam plan, the prescription, the tolerances and the deciding method, and the
-// worker's latest plan calculation. Beam 1 is always the case in the editor.
+// beams of a multi-beam plan, the check's settings (prescription, tolerances, deciding method and
+// the page-wide dose convention, saved with files, links and the autosave), and the worker's
+// latest plan calculation. Beam 1 is always the case in the editor.
 import type { PlanReport } from '../../contract/reports';
 import { DEFAULT_TOLERANCES, type Tolerances } from '../../engine/check/tolerance';
+import { DEFAULT_DOSE_QUANTITY, type DoseQuantity } from '../../engine/dose/doseQuantity';
 import type { CaseProblem } from '../../io/caseFile';
 import type { LaminaCase } from '../../io/caseSchema';
 
@@ -23,7 +25,10 @@ export interface CheckState {
   /** Total prescribed dose at the point (cGy), or null for none. */
   prescriptionDoseCGy: number | null;
   tolerances: Tolerances;
+  /** The deciding method chosen ('' = the default for the path, decided in the worker). */
   checkMethodId: string;
+  /** Dose to water or to medium for every method on the page (one choice, page-wide). */
+  doseTo: DoseQuantity;
   /** The worker's latest plan calculation (src/ui/check/useCheck.ts) and the input it is for. */
   planReport: PlanReport | null;
   planProblems: CaseProblem[];
@@ -40,6 +45,7 @@ export const initialCheckState = (): CheckState => ({
   prescriptionDoseCGy: null,
   tolerances: { ...DEFAULT_TOLERANCES },
   checkMethodId: '',
+  doseTo: DEFAULT_DOSE_QUANTITY,
   planReport: null,
   planProblems: [],
   planKey: null,

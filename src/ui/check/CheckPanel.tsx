@@ -73,7 +73,10 @@ function Settings({ methods }: { methods: { id: string; label: string }[] }) {
           data-testid="check-method"
           onChange={(e) => patchCheck({ checkMethodId: e.target.value })}
         >
-          <option value="">automatic (effective depth first)</option>
+          <option value="">
+            automatic (across a heterogeneity: Monte Carlo when run, else superposition; water-like
+            path: ratio of TMR)
+          </option>
           {methods.map((m) => (
             <option key={m.id} value={m.id}>
               {m.label}

@@ -4,6 +4,12 @@ import type { PlanCheck } from '../../engine/check/planCheck';
 import type { Verdict } from '../../engine/check/tolerance';
 import { VERDICT_TEXT } from '../../io/report/reportModel';
 import {
+  decidingMethodText,
+  spreadStatement,
+  verdictStatement,
+} from '../../io/report/verdictStatement';
+import { doseQuantityLabel } from '../../engine/dose/doseQuantity';
+import {
   beamVerdictHeaders,
   beamVerdictRows,
   pointTableRows,
@@ -19,9 +25,11 @@ const CELL_TEXT: Record<string, string> = {
 };
 
 function VerdictCell({ v }: { v: string }) {
+  // "none: no plan MU" keeps the class of its verdict word.
+  const word = v.split(':')[0] ?? v;
   return (
     <td
-      className={`verdict verdict-${v}`}
+      className={`verdict verdict-${word}`}
       title={v === 'uncertain' ? VERDICT_TEXT.uncertain : undefined}
     >
       {CELL_TEXT[v] ?? v}
@@ -97,22 +105,31 @@ function VerdictGrid({ check }: { check: PlanCheck }) {
 }
 
 export function VerdictBanner({ check }: { check: PlanCheck }) {
-  const m = check.methods.find((x) => x.id === check.decisiveMethodId);
   const v: Verdict = check.verdict;
   return (
-    <p className={`check-verdict verdict-${v}`} role="status" data-testid="check-verdict">
-      <strong>
-        {v === 'pass'
-          ? 'Within tolerance'
-          : v === 'fail'
-            ? 'Outside tolerance'
-            : v === 'uncertain'
-              ? 'Not decided'
-              : 'Not compared'}
-      </strong>
-      {' — '}
-      {m ? `decided by ${m.label}` : 'no method computed'}; {VERDICT_TEXT[v]}.
-    </p>
+    <div className={`check-verdict verdict-${v}`} role="status" data-testid="check-verdict">
+      <p>
+        <strong>
+          {v === 'pass'
+            ? 'Within tolerance'
+            : v === 'fail'
+              ? 'Outside tolerance'
+              : v === 'uncertain'
+                ? 'Not decided'
+                : 'Not compared'}
+        </strong>
+        {' — '}
+        <span data-testid="check-verdict-statement">{verdictStatement(check)}</span>
+        {v === 'uncertain' ? ` (${VERDICT_TEXT.uncertain})` : ''}
+      </p>
+      <p className="check-verdict-detail" data-testid="check-deciding-method">
+        Deciding method: {decidingMethodText(check)}.
+        {check.doseTo ? ` Dose reported as ${doseQuantityLabel(check.doseTo)}.` : ''}
+      </p>
+      <p className="check-verdict-detail" data-testid="check-spread">
+        {spreadStatement(check)}
+      </p>
+    </div>
   );
 }
 

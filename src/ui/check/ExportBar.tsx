@@ -4,7 +4,7 @@ import { useState, type RefObject } from 'react';
 import { serializeCase } from '../../io/caseFile';
 import { pngBlobOf, svgTextOf } from '../../io/chartImage';
 import { curvesCsv, pointCheckCsv, totalCheckCsv } from '../../io/csvExport';
-import { serializePlan } from '../../io/planFile';
+import { caseOfPlainPlan, serializePlan } from '../../io/planFile';
 import { APP_VERSION } from '../../io/report/appVersion';
 import { buildReportModel, isoDate } from '../../io/report/reportModel';
 import { downloadReportPdf } from '../../io/report/reportPdf';
@@ -56,7 +56,9 @@ export function ExportBar({
       if (!first) return;
       const url = await shareUrlOf(
         window.location.href,
-        isPlan ? { kind: 'plan', value: view.plan } : { kind: 'case', value: first.case },
+        isPlan
+          ? { kind: 'plan', value: view.plan }
+          : { kind: 'case', value: caseOfPlainPlan(view.plan) ?? first.case },
       );
       setLink(url);
       await navigator.clipboard?.writeText(url).catch(() => undefined);
@@ -122,7 +124,7 @@ export function ExportBar({
                   'application/json',
                 )
               : downloadText(
-                  serializeCase(view.plan.beams[0]!.case),
+                  serializeCase(caseOfPlainPlan(view.plan) ?? view.plan.beams[0]!.case),
                   `lamina-case-${stamp}.json`,
                   'application/json',
                 )

@@ -1,108 +1,140 @@
-// The planning system's values to compare with: dose and MU per beam and point. Beam 1's values
-// are saved in the case (points[].planningDoseCGy / planningMu); extra beams keep them in theirs.
-import type { CasePoint } from '../../io/caseSchema';
+// The planning system's values to compare with: one MU per beam (saved in the beam's case as
+// beam.planningMu) and the dose at each point from that beam (points[].planningDoseCGy). Beam 1
+// is the editor's case (edits are undoable); extra beams keep the values in their own cases.
+import type { CaseBeam, CasePoint, LaminaCase } from '../../io/caseSchema';
 import { editCase, useAppStore } from '../../state/store';
 import { patchExtraBeam, useCheckStore } from './checkStore';
 import { NumInput } from './NumInput';
 
-type Field = 'planningDoseCGy' | 'planningMu';
+function testIdOf(...parts: string[]): string {
+  return parts.join('-').replace(/[^A-Za-z0-9_-]/g, '_');
+}
 
-function withValue<P extends CasePoint>(p: P, field: Field, v: number | null): P {
-  const next = { ...p };
-  if (v === null) delete next[field];
-  else next[field] = v;
+function withMu(beam: CaseBeam, v: number | null): CaseBeam {
+  const next = { ...beam };
+  if (v === null) delete next.planningMu;
+  else next.planningMu = v;
   return next;
 }
 
-function Row({
-  beamId,
-  point,
-  onSet,
-}: {
-  beamId: string;
-  point: CasePoint;
-  onSet: (field: Field, v: number | null) => void;
-}) {
-  const tid = `${beamId}-${point.id}`.replace(/[^A-Za-z0-9_-]/g, '_');
-  return (
-    <tr>
-      <td>{beamId}</td>
-      <td>{point.id}</td>
-      <td>{point.depthCm.toFixed(2)}</td>
-      <td>
-        <NumInput
-          label={`Planning dose, beam ${beamId}, point ${point.id}`}
-          hideLabel
-          allowEmpty
-          min={-1e-12}
-          value={point.planningDoseCGy}
-          testId={`plan-dose-${tid}`}
-          onCommit={(v) => onSet('planningDoseCGy', v)}
-        />
-      </td>
-      <td>
-        <NumInput
-          label={`Planning MU, beam ${beamId}, point ${point.id}`}
-          hideLabel
-          allowEmpty
-          value={point.planningMu}
-          testId={`plan-mu-${tid}`}
-          onCommit={(v) => onSet('planningMu', v)}
-        />
-      </td>
-    </tr>
-  );
+function withDose<P extends CasePoint>(p: P, v: number | null): P {
+  const next = { ...p };
+  if (v === null) delete next.planningDoseCGy;
+  else next.planningDoseCGy = v;
+  return next;
+}
+
+function patchExtraCase(key: string, fn: (c: LaminaCase) => LaminaCase): void {
+  const now = useCheckStore.getState().extraBeams.find((x) => x.key === key);
+  if (now) patchExtraBeam(key, { case: fn(now.case) });
+}
+
+interface BeamRow {
+  key: string;
+  id: string;
+  mu: number | undefined;
+  setMu: (v: number | null) => void;
+  points: { key: string; point: CasePoint; setDose: (v: number | null) => void }[];
 }
 
 export function PlanningValues() {
-  const points = useAppStore((s) => s.history.present.points);
+  const editor = useAppStore((s) => s.history.present);
   const first = useCheckStore((s) => s.firstBeam);
   const extra = useCheckStore((s) => s.extraBeams);
+  const rows: BeamRow[] = [
+    {
+      key: 'first',
+      id: first.id,
+      mu: editor.beam.planningMu,
+      setMu: (v) => editCase((c) => ({ ...c, beam: withMu(c.beam, v) }), 'planning-mu'),
+      points: editor.points.map((p) => ({
+        key: p.key,
+        point: p,
+        setDose: (v) =>
+          editCase(
+            (c) => ({
+              ...c,
+              points: c.points.map((q) => (q.key === p.key ? withDose(q, v) : q)),
+            }),
+            `planning-dose-${p.key}`,
+          ),
+      })),
+    },
+    ...extra.map((b): BeamRow => ({
+      key: b.key,
+      id: b.id,
+      mu: b.case.beam.planningMu,
+      setMu: (v) => patchExtraCase(b.key, (c) => ({ ...c, beam: withMu(c.beam, v) })),
+      points: b.case.points.map((p, i) => ({
+        key: `${b.key}-${i}`,
+        point: p,
+        setDose: (v) =>
+          patchExtraCase(b.key, (c) => ({
+            ...c,
+            points: c.points.map((q, k) => (k === i ? withDose(q, v) : q)),
+          })),
+      })),
+    })),
+  ];
   return (
     <table className="check-table" data-testid="planning-values">
-      <caption>Planning system values (per beam, at each point; leave empty to skip)</caption>
+      <caption>
+        Planning system values: one MU per beam, and the dose from that beam at each point (leave
+        empty to skip)
+      </caption>
       <thead>
         <tr>
           <th scope="col">Beam</th>
+          <th scope="col">Planning MU</th>
           <th scope="col">Point</th>
           <th scope="col">Depth (cm)</th>
           <th scope="col">Planning dose (cGy)</th>
-          <th scope="col">Planning MU</th>
         </tr>
       </thead>
-      <tbody>
-        {points.map((p) => (
-          <Row
-            key={p.key}
-            beamId={first.id}
-            point={p}
-            onSet={(field, v) =>
-              editCase(
-                (c) => ({
-                  ...c,
-                  points: c.points.map((q) => (q.key === p.key ? withValue(q, field, v) : q)),
-                }),
-                `planning-${field}-${p.key}`,
-              )
-            }
-          />
-        ))}
-        {extra.flatMap((b) =>
-          b.case.points.map((p, i) => (
-            <Row
-              key={`${b.key}-${i}`}
-              beamId={b.id}
-              point={p}
-              onSet={(field, v) => {
-                const now = useCheckStore.getState().extraBeams.find((x) => x.key === b.key);
-                if (!now) return;
-                const pts = now.case.points.map((q, k) => (k === i ? withValue(q, field, v) : q));
-                patchExtraBeam(b.key, { case: { ...now.case, points: pts } });
-              }}
-            />
-          )),
-        )}
-      </tbody>
+      {rows.map((b) => (
+        <tbody key={b.key} className="planning-beam">
+          {(b.points.length > 0 ? b.points : [null]).map((p, k) => (
+            <tr key={p?.key ?? 'none'}>
+              {k === 0 ? (
+                <>
+                  <th scope="rowgroup" rowSpan={Math.max(1, b.points.length)}>
+                    {b.id}
+                  </th>
+                  <td rowSpan={Math.max(1, b.points.length)}>
+                    <NumInput
+                      label={`Planning MU, beam ${b.id}`}
+                      hideLabel
+                      allowEmpty
+                      value={b.mu}
+                      testId={testIdOf('plan-mu', b.id)}
+                      onCommit={b.setMu}
+                    />
+                  </td>
+                </>
+              ) : null}
+              {p ? (
+                <>
+                  <td>{p.point.id}</td>
+                  <td>{p.point.depthCm.toFixed(2)}</td>
+                  <td>
+                    <NumInput
+                      label={`Planning dose, beam ${b.id}, point ${p.point.id}`}
+                      hideLabel
+                      allowEmpty
+                      min={-1e-12}
+                      value={p.point.planningDoseCGy}
+                      testId={testIdOf('plan-dose', b.id, p.point.id)}
+                      onCommit={p.setDose}
+                    />
+                  </td>
+                </>
+              ) : (
+                <td colSpan={3}>(no points)</td>
+              )}
+            </tr>
+          ))}
+        </tbody>
+      ))}
     </table>
   );
 }

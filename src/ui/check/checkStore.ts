@@ -2,6 +2,7 @@
 // page is open: tab switches do not lose them). Beam 1 is always the case in the editor.
 import type { CheckState, ExtraBeam } from '../../state/slices/checkSlice';
 import { sliceOf } from '../../state/slice';
+import type { DoseQuantity } from '../../engine/dose/doseQuantity';
 import { toCaseFile } from '../../state/editorCase';
 import { replaceCase, setWaterSource, useAppStore } from '../../state/store';
 
@@ -21,6 +22,11 @@ export function newBeamKey(): string {
 
 export function patchCheck(patch: Partial<CheckState>): void {
   set(patch);
+}
+
+/** The page-wide dose convention (every method, the charts, the check and the record). */
+export function setDoseTo(doseTo: DoseQuantity): void {
+  set({ doseTo });
 }
 
 export function patchFirstBeam(patch: Partial<CheckState['firstBeam']>): void {

@@ -1,7 +1,8 @@
 // Opening plans and beams for the check: from a file (whole plan, or beams added to it) or from
 // a plan link in the page address. Invalid input changes nothing and lists its problems.
 import type { ChangeEvent } from 'react';
-import { parsePlanText, type LaminaPlan } from '../../io/planFile';
+import { checkSettingsOfPlan, parsePlanText, type LaminaPlan } from '../../io/planFile';
+import { applyCheckSettings } from './pageCheckSettings';
 import { decodeShareHash } from '../../io/shareLink';
 import { replaceCase, setNotice } from '../../state/store';
 import {
@@ -22,13 +23,8 @@ export function loadPlan(plan: LaminaPlan): void {
   clearExtraBeams();
   for (const b of rest)
     addExtraBeam({ id: b.id, label: b.label ?? '', weight: b.weight, case: b.case });
-  patchCheck({
-    planName: plan.beams.length > 1 ? plan.name : '',
-    prescriptionPointId: plan.prescription?.pointId ?? '',
-    prescriptionDoseCGy: plan.prescription?.doseCGy ?? null,
-    ...(plan.tolerances ? { tolerances: { ...plan.tolerances } } : {}),
-    checkMethodId: plan.checkMethodId ?? '',
-  });
+  patchCheck({ planName: plan.beams.length > 1 ? plan.name : '' });
+  applyCheckSettings(checkSettingsOfPlan(plan));
 }
 
 /** Open a plan carried in the page address (#plan=…), then drop the hash. */

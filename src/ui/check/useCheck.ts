@@ -1,12 +1,15 @@
 // Everything the check panel shows comes from the compute worker's plan calculation (purpose
 // 'plan', src/compute/calculationService): the plan built from the editor's case and the check
-// inputs, every beam calculated with the page's water source, the page's Monte Carlo run merged
-// into beam 1 while it belongs to it, and the point check. The page only schedules and draws.
+// settings (prescription, tolerances, deciding method, dose convention), every beam calculated
+// with the page's water source, the page's Monte Carlo run merged into beam 1 while it belongs to
+// it, and the point check with its deciding method (decided in the worker). The page only
+// schedules and draws.
 import { useEffect, useMemo } from 'react';
 import { getComputeWorker } from '../../compute/computeClient';
 import type { PlanAnswer } from '../../compute/calculationService';
 import type { PlanReport } from '../../contract/reports';
 import type { PlanCheck } from '../../engine/check/planCheck';
+import { DEFAULT_DOSE_QUANTITY } from '../../engine/dose/doseQuantity';
 import type { LaminaCase } from '../../io/caseSchema';
 import { PLAN_FORMAT, PLAN_VERSION } from '../../io/planSchema';
 import type { LaminaPlan } from '../../io/planFile';
@@ -61,6 +64,7 @@ export function planOf(first: LaminaCase, s: CheckState): LaminaPlan {
   if (s.prescriptionDoseCGy !== null && s.prescriptionPointId)
     plan.prescription = { pointId: s.prescriptionPointId, doseCGy: s.prescriptionDoseCGy };
   if (s.checkMethodId) plan.checkMethodId = s.checkMethodId;
+  plan.doseTo = s.doseTo;
   return plan;
 }
 
@@ -79,7 +83,7 @@ interface PlanInput {
 }
 
 /**
- * Keep the plan calculated in the compute worker whenever the editor's case, the check inputs,
+ * Keep the plan calculated in the compute worker whenever the editor's case, the check settings,
  * the water source or the page's Monte Carlo run change (latest wins). Returns the key of the
  * current input: a shown result with another key is pending.
  */
@@ -97,6 +101,7 @@ export function usePlanCalculation(): string {
     prescriptionDoseCGy,
     prescriptionPointId,
     checkMethodId,
+    doseTo,
   } = s;
   const input = useMemo((): PlanInput => {
     const first = toCaseFile(present);
@@ -109,6 +114,7 @@ export function usePlanCalculation(): string {
       prescriptionDoseCGy,
       prescriptionPointId,
       checkMethodId,
+      doseTo,
     });
     return {
       key: JSON.stringify([plan, water, mcResult?.histories ?? null, mcStatus]),
@@ -127,6 +133,7 @@ export function usePlanCalculation(): string {
     prescriptionDoseCGy,
     prescriptionPointId,
     checkMethodId,
+    doseTo,
   ]);
 
   const runner = useMemo(
@@ -134,17 +141,19 @@ export function usePlanCalculation(): string {
       makeLatestOnly(
         ({ plan, water: w }: PlanInput): Promise<PlanAnswer> => {
           const first = plan.beams[0]!.case;
+          const doseTo = plan.doseTo ?? DEFAULT_DOSE_QUANTITY;
           return getComputeWorker().calculatePlan({
             purpose: 'plan',
             plan: documentOf(plan),
             water: { kind: w },
-            // The check inputs edited on the page (a one-beam document carries none of its own).
+            // The check settings edited on the page (a one-beam document carries none of its own).
             options: {
               ...(plan.tolerances ? { tolerances: plan.tolerances } : {}),
               ...(plan.prescription ? { prescription: plan.prescription } : {}),
               ...(plan.checkMethodId ? { checkMethodId: plan.checkMethodId } : {}),
+              doseTo,
             },
-            mcRun: currentMcAttachment(first, w),
+            mcRun: currentMcAttachment(first, w, doseTo),
           });
         },
         (result, id) => {

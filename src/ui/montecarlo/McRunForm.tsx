@@ -1,14 +1,16 @@
-// The run settings: histories (presets or typed, checked with a message), seed, dose to medium
-// or to water, Start and Cancel.
+// The run settings: histories (presets or typed, checked with a message), seed, Start and
+// Cancel. The dose convention is the page's (one choice for every method), shown here.
 import { useId } from 'react';
 import { HISTORY_PRESETS, groupDigits, parseHistories, parseSeed, type Parsed } from './mcRunModel';
 import { patchMcForm, useMcForm } from './mcRunner';
+import { doseQuantityLabel } from '../../engine/dose/doseQuantity';
+import { useAppStore } from '../../state/store';
 
 export interface McRunFormProps {
   running: boolean;
   /** Why Start is not possible (invalid case), or null. */
   blocked: string | null;
-  onStart: (histories: number, seed: number, doseToWater: boolean) => void;
+  onStart: (histories: number, seed: number) => void;
   onCancel: () => void;
 }
 
@@ -18,6 +20,7 @@ function messageOf<T>(p: Parsed<T>): string | null {
 
 export function McRunForm({ running, blocked, onStart, onCancel }: McRunFormProps) {
   const form = useMcForm();
+  const doseTo = useAppStore((s) => s.check.doseTo);
   const id = useId();
   const histories = parseHistories(form.historiesText);
   const seed = parseSeed(form.seedText);
@@ -27,7 +30,7 @@ export function McRunForm({ running, blocked, onStart, onCancel }: McRunFormProp
       className="mc-form"
       onSubmit={(e) => {
         e.preventDefault();
-        if (canStart) onStart(histories.value, seed.value, form.doseToWater);
+        if (canStart) onStart(histories.value, seed.value);
       }}
     >
       <fieldset className="field">
@@ -79,31 +82,10 @@ export function McRunForm({ running, blocked, onStart, onCancel }: McRunFormProp
           />
           {seed.ok ? null : <span className="field-message">{messageOf(seed)}</span>}
         </div>
-        <fieldset className="field segmented">
-          <legend>Dose reported as</legend>
-          <label>
-            <input
-              type="radio"
-              name={`${id}-dm`}
-              data-testid="mc-dose-medium"
-              checked={!form.doseToWater}
-              disabled={running}
-              onChange={() => patchMcForm({ doseToWater: false })}
-            />
-            dose to medium
-          </label>
-          <label>
-            <input
-              type="radio"
-              name={`${id}-dm`}
-              data-testid="mc-dose-water"
-              checked={form.doseToWater}
-              disabled={running}
-              onChange={() => patchMcForm({ doseToWater: true })}
-            />
-            dose to water (stopping-power ratio)
-          </label>
-        </fieldset>
+        <p className="hint" data-testid="mc-dose-to">
+          Scored as dose to medium; reported as {doseQuantityLabel(doseTo)}, the page&apos;s choice
+          for every method (Dose reported as, above the charts).
+        </p>
       </div>
       <div className="mc-actions">
         <button type="submit" data-testid="mc-start" disabled={!canStart}>

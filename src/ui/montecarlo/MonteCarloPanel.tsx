@@ -6,6 +6,7 @@ import { validateCase } from '../../io/caseFile';
 import { toCaseFile } from '../../state/editorCase';
 import { setMonteCarlo, useMonteCarloStore, type McRunStatus } from '../../state/monteCarloStore';
 import { useAppStore } from '../../state/store';
+import { doseQuantityLabel } from '../../engine/dose/doseQuantity';
 import { McExplanation } from './McExplanation';
 import { McProgressView } from './McProgressView';
 import { McRunForm } from './McRunForm';
@@ -34,20 +35,21 @@ export function MonteCarloPanel() {
     ? null
     : `The case cannot be run as it stands: ${valid.problems.map((p) => `${p.path}: ${p.message}`).join('; ')}`;
 
-  const onStart = (histories: number, seed: number, doseToWater: boolean) => {
+  const onStart = (histories: number, seed: number) => {
     if (!valid.ok) return;
     const caseData = valid.value;
+    const { waterSource, check } = useAppStore.getState();
     // Calibration, engine options and the run's key come from the compute worker (one place for
     // the CLI and the page); the batches then run on the Monte Carlo worker pool.
     void getComputeWorker()
       .prepareMonteCarlo({
         purpose: 'monte-carlo',
         case: caseData,
-        water: { kind: useAppStore.getState().waterSource },
-        run: { histories, seed, doseToWater },
+        water: { kind: waterSource },
+        run: { histories, seed, doseTo: check.doseTo },
       })
       .then((setup) => {
-        if (setup.ok) startRun({ caseData, setup, histories, seed, doseToWater });
+        if (setup.ok) startRun({ caseData, setup, histories, seed });
         else
           setMonteCarlo({
             status: 'failed',
@@ -75,15 +77,15 @@ export function MonteCarloPanel() {
         ) : null}
         {stale ? (
           <span className="mc-stale" data-testid="mc-stale">
-            stale (case changed): this run is not drawn in the depth-dose and CF views; start a new
-            run for the current case.
+            stale (case, water data or dose convention changed): this run is not drawn in the
+            depth-dose and CF views; start a new run for the current case.
           </span>
         ) : null}
       </div>
       {run ? (
         <p className="hint" data-testid="mc-run-settings">
           Run: {groupDigits(run.histories)} histories per run, seed {run.seed},{' '}
-          {run.doseToWater ? 'dose to water' : 'dose to medium'}; dose per MU:{' '}
+          {doseQuantityLabel(run.doseTo)}; dose per MU:{' '}
           {run.calibration.mode === 'cf-times-water'
             ? run.calibration.source
             : `calibration run × ${run.calibration.referenceDosePerMuCGy} cGy/MU × S_c ${run.calibration.collimatorScatterFactor.toFixed(3)} (${run.calibration.source})`}

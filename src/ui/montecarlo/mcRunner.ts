@@ -27,7 +27,6 @@ export interface StartRequest {
   setup: McSetup;
   histories: number;
   seed: number;
-  doseToWater: boolean;
   /** Worker count and factory (tests run the batches in-process); browser workers by default. */
   pool?: Pick<McPoolOptions, 'workers' | 'createWorker'>;
 }
@@ -40,7 +39,7 @@ export function startRun(req: StartRequest): void {
     run: {
       histories: req.histories,
       seed: req.seed,
-      doseToWater: req.doseToWater,
+      doseTo: req.setup.doseTo,
       calibration,
       startedAtMs: Date.now(),
     },

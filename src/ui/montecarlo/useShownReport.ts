@@ -7,13 +7,17 @@ import type { CalcReport } from '../../contract/reports';
 import { toCaseFile } from '../../state/editorCase';
 import { useAppStore } from '../../state/store';
 
-/** The run key of the case being edited with the page's water source (src/compute/monteCarloRunKey). */
+/**
+ * The run key of the case being edited with the page's water source and dose convention
+ * (src/compute/monteCarloRunKey).
+ */
 export function useCurrentMcCaseKey(): string {
   const present = useAppStore((s) => s.history.present);
   const waterSource = useAppStore((s) => s.waterSource);
+  const doseTo = useAppStore((s) => s.check.doseTo);
   return useMemo(
-    () => monteCarloRunKey(toCaseFile(present), { kind: waterSource }),
-    [present, waterSource],
+    () => monteCarloRunKey(toCaseFile(present), { kind: waterSource }, doseTo),
+    [present, waterSource, doseTo],
   );
 }
 

@@ -32,7 +32,8 @@ function halfWidthOf(grids: readonly { xCm: readonly number[] }[]): number {
 export function DosePlanePanel() {
   const present = useAppStore((s) => s.history.present);
   const raw = useMemo(() => toCaseFile(present), [present]);
-  const key = planeKeyOf(raw);
+  const doseTo = useAppStore((s) => s.check.doseTo);
+  const key = planeKeyOf(raw, doseTo);
   const [retry, setRetry] = useState(0);
   const { planes, updating, error } = usePlanes(raw, key, retry);
   const mcPlane = useMonteCarloStore((s) => s.result?.plane ?? null);
@@ -43,7 +44,7 @@ export function DosePlanePanel() {
       planeSources({
         typeB: planes,
         pending: updating,
-        mc: { plane: mcPlane, matches: runMatchesCase(mcKey, raw), running: mcRunning },
+        mc: { plane: mcPlane, matches: runMatchesCase(mcKey, raw, doseTo), running: mcRunning },
       }),
     // raw changes with every edit; the plane only with the key
     // eslint-disable-next-line react-hooks/exhaustive-deps

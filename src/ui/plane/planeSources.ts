@@ -42,9 +42,23 @@ function sortedKeys(v: unknown): unknown {
   );
 }
 
-/** What a dose plane depends on: the beam and the slabs, in a stable order. */
-export function planeKeyOf(c: { beam: unknown; layers: readonly LayerLike[] }): string {
-  return JSON.stringify({ beam: sortedKeys(c.beam), layers: c.layers.map(layerTuple) });
+/**
+ * What a dose plane depends on: the beam (not its planning MU, a value to compare with) and the
+ * slabs, in a stable order; `doseTo` for the page's planes (a Monte Carlo run key has its own).
+ */
+export function planeKeyOf(
+  c: { beam: unknown; layers: readonly LayerLike[] },
+  doseTo?: string,
+): string {
+  const beam =
+    typeof c.beam === 'object' && c.beam !== null
+      ? Object.fromEntries(Object.entries(c.beam).filter(([k]) => k !== 'planningMu'))
+      : c.beam;
+  return JSON.stringify({
+    beam: sortedKeys(beam),
+    layers: c.layers.map(layerTuple),
+    ...(doseTo ? { doseTo } : {}),
+  });
 }
 
 /**
@@ -52,11 +66,18 @@ export function planeKeyOf(c: { beam: unknown; layers: readonly LayerLike[] }): 
  * as objects or as [material, thickness, density] tuples) has the beam and slabs of `c`. Points,
  * names and notes do not change a plane.
  */
-export function runMatchesCase(caseKey: string | null, c: LaminaCase): boolean {
+export function runMatchesCase(caseKey: string | null, c: LaminaCase, doseTo?: string): boolean {
   if (caseKey === null) return false;
   try {
-    const parsed = JSON.parse(caseKey) as { beam?: unknown; layers?: unknown } | null;
+    const parsed = JSON.parse(caseKey) as {
+      beam?: unknown;
+      layers?: unknown;
+      doseTo?: unknown;
+    } | null;
     if (!parsed || !parsed.beam || !Array.isArray(parsed.layers)) return false;
+    // A run in the other dose convention is not drawn beside planes in this one.
+    if (doseTo !== undefined && parsed.doseTo !== undefined && parsed.doseTo !== doseTo)
+      return false;
     const layers = parsed.layers as LayerLike[];
     return planeKeyOf({ beam: parsed.beam, layers }) === planeKeyOf(c);
   } catch {

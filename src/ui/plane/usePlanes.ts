@@ -7,6 +7,7 @@ import { getComputeWorker } from '../../compute/computeClient';
 import type { DosePlane } from '../../engine/superposition/typeBMethods';
 import type { LaminaCase } from '../../io/caseSchema';
 import { makeLatestOnly } from '../../state/latestOnly';
+import { useAppStore } from '../../state/store';
 
 export type TypeBPlanes = Partial<Record<'superposition' | 'pencil-beam', DosePlane | string>>;
 
@@ -27,7 +28,13 @@ async function fetchPlanes(input: {
 }): Promise<{ key: string; planes: TypeBPlanes } | string> {
   const api = getComputeWorker();
   const answers = await Promise.all(
-    ENGINES.map((method) => api.dosePlane(input.raw, { method, profileDepthsCm: [] })),
+    ENGINES.map((method) =>
+      api.dosePlane(input.raw, {
+        method,
+        profileDepthsCm: [],
+        doseTo: useAppStore.getState().check.doseTo,
+      }),
+    ),
   );
   const planes: TypeBPlanes = {};
   for (const [k, a] of answers.entries()) {

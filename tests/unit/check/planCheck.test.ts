@@ -17,12 +17,14 @@ function beam(
   point: { planningDoseCGy?: number; planningMu?: number; depthCm?: number },
   layers = WATER,
 ): CheckBeamInput {
+  const { planningMu, ...atPoint } = point;
   return {
     id,
     label: id,
     weight,
+    planningMu,
     layers,
-    points: [{ id: 'P', depthCm: point.depthCm ?? 10, ...point }],
+    points: [{ id: 'P', depthCm: point.depthCm ?? 10, ...atPoint }],
     methods: Object.entries(dpm).map(([mid, v]) => ({
       id: mid,
       label: mid,

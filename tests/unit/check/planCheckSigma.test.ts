@@ -10,12 +10,14 @@ function beam(
   methods: Record<string, { dpm: number | null; sigma?: number }>,
   point: { planningDoseCGy?: number; planningMu?: number },
 ): CheckBeamInput {
+  const { planningMu, ...atPoint } = point;
   return {
     id,
     label: id,
     weight: 1,
+    planningMu,
     layers: WATER,
-    points: [{ id: 'P', depthCm: 10, ...point }],
+    points: [{ id: 'P', depthCm: 10, ...atPoint }],
     methods: Object.entries(methods).map(([mid, v]) => ({
       id: mid,
       label: mid,

@@ -57,7 +57,14 @@ describe('calc CLI: point check', () => {
     const text = textOf(result, doc.isPlan);
     expect(text).toMatch(/Point check/);
     expect(text).toMatch(/ref\s+10\.00\s+Ratio of TMR \(effective depth\)/);
-    expect(text).toMatch(/Check verdict \(rtmr\): within tolerance/);
+    // Water-like path: the ratio of TMR decides by default, and the verdict names its difference.
+    expect(text).toMatch(
+      /Deciding method: Ratio of TMR \(effective depth\), default for water-like paths/,
+    );
+    expect(text).toMatch(
+      /Check verdict: pass — Ratio of TMR \(effective depth\): ΔMU \+0\.\d\d % within ±2 % \(beam beam-1, point ref\)/,
+    );
+    expect(text).toMatch(/Dose reported as: dose to water/);
   });
 
   it('jsonOf(...) keeps the calc document of a case and adds its check section', () => {
@@ -127,7 +134,7 @@ describe('calc CLI: point check', () => {
   it('npm run calc exits 1 for a failing batch, prints JSON rows with --json, and 0 for one case', () => {
     const single = calc([WATER]);
     expect(single.code).toBe(0);
-    expect(single.out).toMatch(/Check verdict \(rtmr\): within tolerance/);
+    expect(single.out).toMatch(/Check verdict: pass — Ratio of TMR/);
     const batch = calc(['--batch', '--json', WATER, AIR]);
     expect(batch.code).toBe(1);
     const rows = JSON.parse(batch.out) as { verdict: string }[];

@@ -52,7 +52,12 @@ const caseNamed = (name: string): LaminaCase => ({
   layers: [{ materialId: 'water', thicknessCm: 10 }],
   points: [],
 });
-const snap = (name: string): CalcSnapshot => ({ raw: caseNamed(name), water: 'case', mcRun: null });
+const snap = (name: string): CalcSnapshot => ({
+  raw: caseNamed(name),
+  water: 'case',
+  doseTo: 'water',
+  mcRun: null,
+});
 const flush = () => new Promise((r) => setTimeout(r, 0));
 
 function setup() {

@@ -12,9 +12,8 @@ function demoCase() {
   // Planning values so the check compares: 200 cGy at P1 with 260 MU (invented numbers).
   return {
     ...parsed.value,
-    points: parsed.value.points.map((p) =>
-      p.id === 'P1' ? { ...p, planningDoseCGy: 200, planningMu: 260 } : p,
-    ),
+    beam: { ...parsed.value.beam, planningMu: 260 },
+    points: parsed.value.points.map((p) => (p.id === 'P1' ? { ...p, planningDoseCGy: 200 } : p)),
   };
 }
 

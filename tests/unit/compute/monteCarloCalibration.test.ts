@@ -132,9 +132,11 @@ describe('Monte Carlo with a measured table', () => {
       run: { histories: 4000, seed: 3 },
     });
     if (!setup.ok) throw new Error('setup');
-    expect(setup.key).toBe(monteCarloRunKey(c, { kind: 'case' }));
+    // No convention asked for and none in the case: dose to water, as for the CLI.
+    expect(setup.doseTo).toBe('water');
+    expect(setup.key).toBe(monteCarloRunKey(c, { kind: 'case' }, 'water'));
     const parts = computeCaseParts(c, { methods: ['water', 'monte-carlo'] });
-    const run = runMonteCarloForCase(parts, { histories: 4000, seed: 3 });
+    const run = runMonteCarloForCase(parts, { histories: 4000, seed: 3 }, 'water');
     const page = calculateCaseRequest({
       purpose: 'full',
       case: c,
@@ -143,7 +145,7 @@ describe('Monte Carlo with a measured table', () => {
       mcRun: { key: setup.key, run, note: null },
     });
     expect(page.ok && page.report).toEqual(report);
-    expect(assembleReport(parts, { run })).toEqual(report);
+    expect(assembleReport(parts, { run }, 'water')).toEqual(report);
     // A run of another case is not merged.
     const other = calculateCaseRequest({
       purpose: 'full',
@@ -153,5 +155,43 @@ describe('Monte Carlo with a measured table', () => {
       mcRun: { key: setup.key, run, note: null },
     });
     expect(other.ok && other.report.methods.map((m) => m.id)).toEqual(['water']);
+    // Nor a run made in the other dose convention: its key is another.
+    const medium = calculateCaseRequest({
+      purpose: 'full',
+      case: c,
+      water: { kind: 'case' },
+      options: { methods: ['water', 'monte-carlo'], doseTo: 'medium' },
+      mcRun: { key: setup.key, run, note: null },
+    });
+    expect(medium.ok && medium.report.methods.map((m) => m.id)).toEqual(['water']);
+    expect(medium.ok && medium.report.doseTo).toBe('medium');
+  });
+
+  it('a run in dose to medium differs from dose to water by s_w,m in the lung and not in water (derived)', () => {
+    const parts = computeCaseParts(c, { methods: ['water', 'monte-carlo'] });
+    const opts = { histories: 4000, seed: 3 };
+    const w = assembleReport(parts, { run: runMonteCarloForCase(parts, opts, 'water') }, 'water');
+    const m = assembleReport(parts, { run: runMonteCarloForCase(parts, opts, 'medium') }, 'medium');
+    const at = (r: typeof w, id: string) =>
+      r.methods.find((x) => x.id === 'monte-carlo')!.points.find((p) => p.id === id)!;
+    // P1 (5 cm) lies in the lung layer (3–8 cm): D_w = s_w,lung × D_m with the same seed, so the
+    // ratio is the conversion factor itself, > 1 (stopping-power ratio water/lung at 6 MV ≈ 1.004).
+    const ratio = (at(w, 'P1').dosePerMuCGy as number) / (at(m, 'P1').dosePerMuCGy as number);
+    expect(ratio).toBeGreaterThan(1);
+    expect(ratio).toBeLessThan(1.02);
+    // P2 (10 cm) lies in water: the same number in both conventions.
+    expect(at(w, 'P2').dosePerMuCGy).toBeCloseTo(at(m, 'P2').dosePerMuCGy as number, 12);
+    expect(w.methods.find((x) => x.id === 'monte-carlo')!.dose?.quantity).toBe('water');
+    expect(m.methods.find((x) => x.id === 'monte-carlo')!.dose?.quantity).toBe('medium');
+    // A run in the other convention is not drawn as if it were this one's.
+    const mixed = assembleReport(
+      parts,
+      { run: runMonteCarloForCase(parts, opts, 'medium') },
+      'water',
+    );
+    expect(mixed.methods.map((x) => x.id)).toEqual(['water']);
+    expect(mixed.unavailable.find((u) => u.id === 'monte-carlo')?.reason).toMatch(
+      /dose to medium, not dose to water/,
+    );
   });
 });

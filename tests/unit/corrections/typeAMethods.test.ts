@@ -13,7 +13,7 @@ import {
 import { rtmrMethod } from '../../../src/engine/corrections/rtmr';
 import { TYPE_A_METHODS, typeAMethodById } from '../../../src/engine/corrections/typeAMethods';
 import { makeF6WaterData } from '../../fixtures/f6WaterData';
-import { PHANTOM_B, PHANTOM_L, slabs } from '../../fixtures/slabPhantoms';
+import { PHANTOM_L, slabs } from '../../fixtures/slabPhantoms';
 import { expectRelClose } from '../../helpers/expectClose';
 
 const wd = makeF6WaterData();
@@ -36,10 +36,8 @@ describe('method registry', () => {
     expect(typeAMethodById('nope')).toBeUndefined();
   });
 
-  it('variants name the choices: Batho table, shift, dose to water or medium, ETAR ρ̃ source', () => {
+  it('variants name the choices: Batho table, shift, ETAR ρ̃ source', () => {
     expect(bathoMethod.variant({ bathoTable: 'tar' })).toMatch(/^TAR, no shift, μ₀ ≡ water/);
-    expect(bathoMethod.variant({})).toMatch(/dose to water/);
-    expect(bathoMethod.variant({ muEnRatioOfLayer: () => 1 })).toMatch(/dose to medium/);
     expect(bathoModifiedMethod.variant({})).toMatch(/shift z_bu = d_max/);
     expect(etarMethod.variant({ etarRhoTilde: 0.6 })).toMatch(/ρ̃ = 0\.6 \(entered\)/);
     expect(etarMethod.variant({})).toMatch(/exponential scatter kernel/);
@@ -71,15 +69,6 @@ describe('EPL with PDD', () => {
 });
 
 describe('Batho options', () => {
-  it('batho(...) with a (μ_en/ρ) ratio scales the CF by the ratio of the point’s layer', () => {
-    const p = PHANTOM_B();
-    const water = bathoMethod.correct(p, 4.5, 10, wd, {}).cf as number;
-    const medium = bathoMethod.correct(p, 4.5, 10, wd, {
-      muEnRatioOfLayer: (l) => (l.relativeElectronDensity > 1.5 ? 0.96 : 1),
-    }).cf as number;
-    expectRelClose(medium / water, 0.96, 1e-14);
-  });
-
   it('batho(...) for a point inside a slab from the surface is T(X)^(ρ − 1)', () => {
     // Batho special case (Khan, from memory): point inside the slab, X = depth into the slab
     const p = slabs([

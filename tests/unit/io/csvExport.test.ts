@@ -49,12 +49,14 @@ describe('CSV exports', () => {
       'radiological_depth_cm',
       'synthetic_dose_per_mu_cgy',
       'synthetic_cf',
+      'dose_to',
     ]);
     expect(back.data).toHaveLength(report.depthCm.length);
     back.data.forEach((row, i) => {
       expect(row.depth_cm).toBe(report.depthCm[i]);
       expect(row.radiological_depth_cm).toBe(report.radiologicalDepthCm[i]);
       expect(row.synthetic_dose_per_mu_cgy).toBe(m.curve.dosePerMuCGy[i]);
+      expect(row.dose_to).toBe('water');
     });
   });
 
@@ -85,8 +87,9 @@ describe('CSV exports', () => {
       id,
       label: id,
       weight: 1,
+      planningMu: 120,
       layers: [{ topCm: 0, bottomCm: 20, relativeElectronDensity: 1 }],
-      points: [{ id: 'P', depthCm: 10, planningMu: 120, planningDoseCGy: 100 }],
+      points: [{ id: 'P', depthCm: 10, planningDoseCGy: 100 }],
       methods: [{ id: 'water', label: 'water', points: [{ id: 'P', dosePerMuCGy: dpm }] }],
     });
     const check = checkPlan([beam('AP', 0.81), beam('PA', 0.79)], {
@@ -115,8 +118,9 @@ describe('CSV exports', () => {
       id,
       label: id,
       weight: 1,
+      planningMu: 120,
       layers: [{ topCm: 0, bottomCm: 20, relativeElectronDensity: 1 }],
-      points: [{ id: 'P', depthCm: 10, planningMu: 120, planningDoseCGy: 100 }],
+      points: [{ id: 'P', depthCm: 10, planningDoseCGy: 100 }],
       methods: [
         {
           id: 'monte-carlo',

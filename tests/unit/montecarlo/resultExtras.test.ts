@@ -8,8 +8,8 @@ import { planMonteCarlo } from '../../../src/engine/montecarlo/monteCarloPlan';
 import { finalizeMonteCarlo } from '../../../src/engine/montecarlo/monteCarloResult';
 import { runBatch } from '../../../src/engine/montecarlo/runBatch';
 import { lateralProfileAtDepth } from '../../../src/engine/montecarlo/planeProfile';
-import { collisionStoppingPowerMeVCm2PerG } from '../../../src/engine/materials/electronStopping';
-import { makeSpectrumSampler } from '../../../src/engine/montecarlo/spectrumSampler';
+import { stoppingPowerRatioWaterToMedium } from '../../../src/engine/dose/stoppingPowerRatio';
+import { beamSpectrum } from '../../../src/engine/kernels/spectrum';
 import type { McCaseInput } from '../../../src/engine/montecarlo/monteCarloPlan';
 import { expectRelClose } from '../../helpers/expectClose';
 
@@ -25,22 +25,19 @@ const CASE: McCaseInput = {
 const GRID = [1, 4, 8];
 
 describe('Monte Carlo result extras', () => {
-  it('doseToWater converts bone dose by the water/bone stopping-power ratio and leaves water alone', () => {
+  it('doseTo water converts bone dose by s_water,bone and leaves water alone', () => {
     const medium = runMonteCarlo(CASE, { histories: 2000, seed: 9 }, GRID);
-    const water = runMonteCarlo(CASE, { histories: 2000, seed: 9, doseToWater: true }, GRID);
-    // Same seed, same histories: only the conversion differs. ESTAR ratio at one third of the
-    // mean photon energy (Siebers et al. 2000 form with one representative electron energy).
-    const t = makeSpectrumSampler('6MV').meanEnergyMeV / 3;
-    const spr =
-      collisionStoppingPowerMeVCm2PerG('water', t) /
-      collisionStoppingPowerMeVCm2PerG('corticalBone', t);
-    const m = medium.depthDose.case.dosePerFluenceGyCm2;
-    const w = water.depthDose.case.dosePerFluenceGyCm2;
-    // Bin 16 (4.0–4.25 cm) is bone, bin 4 (1.0–1.25 cm) water.
-    expectRelClose(w[16]! / m[16]!, spr, 1e-12);
-    expect(w[4]! / m[4]!).toBe(1);
+    const water = runMonteCarlo(CASE, { histories: 2000, seed: 9, doseTo: 'water' }, GRID);
+    // Same seed, same histories: only the conversion differs (dose/doseConversion.ts).
+    const spr = stoppingPowerRatioWaterToMedium('corticalBone', beamSpectrum('6MV'));
+    const at = (r: typeof medium, depthCm: number) =>
+      r.method.curve.dosePerMuCGy[GRID.indexOf(depthCm)] as number;
+    // Depth 4 cm is bone, 1 cm water.
+    expectRelClose(at(water, 4) / at(medium, 4), spr, 1e-12);
+    expect(at(water, 1) / at(medium, 1)).toBe(1);
     expect(spr).toBeGreaterThan(1.05);
-    expect(water.method.variant).toMatch(/dose to water/);
+    expect(water.method.dose?.quantity).toBe('water');
+    expect(medium.method.dose?.conversion).toBe('native');
   });
 
   it('lateralProfileAtDepth(...) is flat in the field centre and falls outside the field', () => {

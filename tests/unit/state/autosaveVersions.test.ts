@@ -98,6 +98,31 @@ describe('versioned autosave entries', () => {
     });
   });
 
+  it("keeps the check's settings (the case's check block) through a save and a restore", () => {
+    const s = new FakeStorage();
+    const withCheck = {
+      ...demoCase,
+      check: {
+        prescription: { pointId: demoCase.points[0]!.id, doseCGy: 180 },
+        tolerances: { homogeneousPercent: 3, heterogeneousPercent: 4 },
+        checkMethodId: 'batho-modified',
+        doseTo: 'medium' as const,
+      },
+    };
+    expect(saveCaseToStorage(s, withCheck)).toEqual({ ok: true });
+    expect(restoreAutosave(s)).toEqual({ value: withCheck, message: null });
+    // A case mid-edit (point below the phantom) restores leniently with its settings.
+    const midEdit = {
+      ...withCheck,
+      points: [...withCheck.points, { id: 'deep', depthCm: 500 }],
+    };
+    expect(saveCaseToStorage(s, midEdit)).toEqual({ ok: true });
+    expect(restoreAutosave(s).value?.check).toEqual(withCheck.check);
+    // An entry written before the settings were saved restores without them (defaults).
+    expect(saveCaseToStorage(s, demoCase)).toEqual({ ok: true });
+    expect(restoreAutosave(s).value?.check).toBeUndefined();
+  });
+
   it('saving over a version-1 entry upgrades it in place (a readable entry needs no backup)', () => {
     const s = new FakeStorage();
     s.setItem(AUTOSAVE_KEY, serializeCase(demoCase));

@@ -21,8 +21,11 @@ import { PRESETS } from '../../../src/state/presets';
 
 const chest = () => fromCaseFile(PRESETS[0]!.make());
 /** The run key of an editor case (src/compute/monteCarloRunKey), as the page computes it. */
-const monteCarloCaseKey = (c: EditorCase, water: 'case' | 'modelled') =>
-  monteCarloRunKey(toCaseFile(c), { kind: water });
+const monteCarloCaseKey = (
+  c: EditorCase,
+  water: 'case' | 'modelled',
+  doseTo: 'water' | 'medium' = 'water',
+) => monteCarloRunKey(toCaseFile(c), { kind: water }, doseTo);
 
 describe('parseHistories', () => {
   it('parseHistories(...) reads plain, grouped and exponent forms', () => {
@@ -125,6 +128,22 @@ describe('monteCarloCaseKey', () => {
       waterData: { kind: 'tmr', fileName: 't.csv', csv: 'd,10\n1.5,1\n10,0.8\n' },
     });
     expect(monteCarloCaseKey(table, 'case')).not.toBe(monteCarloCaseKey(table, 'modelled'));
+  });
+
+  it('the planning values leave the key alone; the dose convention changes it', () => {
+    const c = chest();
+    const key = monteCarloCaseKey(c, 'modelled');
+    // A planning MU or dose typed in the check is a value to compare with, not physics.
+    const planned = {
+      ...c,
+      beam: { ...c.beam, planningMu: 123.4 },
+      points: c.points.map((p) => ({ ...p, planningDoseCGy: 150 })),
+    };
+    expect(toCaseFile(planned).beam.planningMu).toBe(123.4);
+    expect(monteCarloCaseKey(planned, 'modelled')).toBe(key);
+    // A run reports one convention: a run in the other one is stale.
+    expect(monteCarloCaseKey(c, 'modelled', 'medium')).not.toBe(key);
+    expect(monteCarloCaseKey(c, 'modelled', 'water')).toBe(key);
   });
 
   it('a fresh copy of the same case (new editor keys) has the same key', () => {

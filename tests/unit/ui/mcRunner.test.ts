@@ -53,7 +53,7 @@ function setupOf(caseKey: string, histories: number) {
     purpose: 'monte-carlo',
     case: CASE,
     water: { kind: 'modelled' },
-    run: { histories, seed: 7 },
+    run: { histories, seed: 7, doseTo: 'medium' },
   });
   if (!setup.ok) throw new Error('setup');
   // A distinct key per test run, so the store's key says which run wrote it.
@@ -65,7 +65,6 @@ const request = (caseKey: string, histories: number, delayMs = 0) => ({
   setup: setupOf(caseKey, histories),
   histories,
   seed: 7,
-  doseToWater: false,
   pool: { workers: 2, createWorker: () => localWorker(delayMs) },
 });
 

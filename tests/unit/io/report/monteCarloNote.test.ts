@@ -44,8 +44,9 @@ describe('the record of a Monte Carlo result in the check', () => {
           id: 'AP',
           label: 'AP',
           weight: 1,
+          planningMu: 128,
           layers: [{ topCm: 0, bottomCm: 30, relativeElectronDensity: 1 }],
-          points: [{ id: 'P', depthCm: 10, planningMu: 128, planningDoseCGy: 100 }],
+          points: [{ id: 'P', depthCm: 10, planningDoseCGy: 100 }],
           methods: [
             { id: 'water', label: 'Water', points: [{ id: 'P', dosePerMuCGy: 0.8 }] },
             {

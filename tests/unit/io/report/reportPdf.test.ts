@@ -8,7 +8,7 @@ import type { MethodResult } from '../../../../src/engine/methodResult';
 import { checkInputOf } from '../../../../src/compute/calculatePlan';
 import { validatePlan } from '../../../../src/io/planFile';
 import { buildReportModel, reportFileName } from '../../../../src/io/report/reportModel';
-import { pdfText } from '../../../../src/io/report/pdfText';
+import { pdfTextOf } from '../../../helpers/pdfTextOf';
 import { reportPdfBytes } from '../../../../src/io/report/reportPdf';
 import { pointTableRows, totalTableRows } from '../../../../src/io/report/reportTables';
 import { APP_VERSION } from '../../../../src/io/report/appVersion';
@@ -25,12 +25,20 @@ const plan = validatePlan({
     {
       id: 'AP',
       weight: 1,
-      case: { ...demo, points: [{ id: 'P1', depthCm: 15, planningMu: 140, planningDoseCGy: 100 }] },
+      case: {
+        ...demo,
+        version: 1,
+        points: [{ id: 'P1', depthCm: 15, planningMu: 140, planningDoseCGy: 100 }],
+      },
     },
     {
       id: 'PA',
       weight: 1,
-      case: { ...demo, points: [{ id: 'P1', depthCm: 5, planningMu: 130, planningDoseCGy: 100 }] },
+      case: {
+        ...demo,
+        version: 1,
+        points: [{ id: 'P1', depthCm: 5, planningMu: 130, planningDoseCGy: 100 }],
+      },
     },
   ],
   prescription: { pointId: 'P1', doseCGy: 200 },
@@ -73,8 +81,8 @@ function reportWithSynthetic(): PlanReport {
 }
 
 const latin1 = (buf: ArrayBuffer) => Buffer.from(buf).toString('latin1');
-const shown = (text: string) =>
-  `(${pdfText(text).replace(/\\/g, '\\\\').replace(/\(/g, '\\(').replace(/\)/g, '\\)')}) Tj`;
+/** The lines of text the PDF shows. */
+const shownLines = (pdf: string) => pdfTextOf(pdf).split('\n');
 
 describe('printed record', () => {
   it('reportFileName(date) is ISO-dated', () => {
@@ -95,15 +103,17 @@ describe('printed record', () => {
     expect(rows).toHaveLength(2); // two beams × one point × one method
     const pdf = latin1(await reportPdfBytes(model));
     expect(pdf.startsWith('%PDF-')).toBe(true);
+    const lines = shownLines(pdf);
+    const text = lines.join('\n');
     for (const row of [...rows, ...totalTableRows(result.check)])
-      for (const cellText of row) expect(pdf).toContain(shown(cellText));
-    for (const text of ['Cautions', 'Checked by (name, signature): ______________________________'])
-      expect(pdf).toContain(shown(text));
-    expect(pdf).toContain('Synthetic exponential');
-    expect(pdf).toContain('modelled beam');
-    expect(pdf).toContain(`Lamina ${APP_VERSION}`);
-    expect(pdf).toContain('2026-12-01T23:10:00');
-    expect(pdf).toContain('Water chain at P1');
+      for (const cellText of row) expect(lines).toContain(cellText);
+    for (const t of ['Cautions', 'Checked by (name, signature): ______________________________'])
+      expect(lines).toContain(t);
+    expect(text).toContain('Synthetic exponential');
+    expect(text).toContain('modelled beam');
+    expect(text).toContain(`Lamina ${APP_VERSION}`);
+    expect(text).toContain('2026-12-01T23:10:00');
+    expect(text).toContain('Water chain at P1');
   });
 
   it('a method with a ±1σ curve gets its band drawn (a filled path) and named in the PDF figure', async () => {
@@ -140,7 +150,7 @@ describe('printed record', () => {
     const fills = (pdf: string) => pdf.match(/(?:^|\s)f(?=\s)/g)?.length ?? 0;
     const banded = await pdfOf(withSigma(0.03));
     const flat = await pdfOf(withSigma(0)); // σ = 0: no band
-    expect(banded).toContain(shown('Synthetic exponential (band: ±1σ)'));
+    expect(shownLines(banded)).toContain('Synthetic exponential (band: ±1σ)');
     // One filled band per beam figure (two beams) more than without σ.
     expect(fills(banded) - fills(flat)).toBe(2);
   });

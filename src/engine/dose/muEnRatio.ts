@@ -1,6 +1,8 @@
-// Dose-to-medium factor of the Batho forms: (μ_en/ρ)_medium/(μ_en/ρ)_water, weighted by the
-// beam's energy fluence, Σ ψ_E (μ_en/ρ)_m(E) / Σ ψ_E (μ_en/ρ)_w(E) (large-photon-detector
-// ratio, Attix, from memory). Coefficients: NIST (Hubbell & Seltzer) via the material library.
+// Mass energy-absorption ratio medium/water, (μ_en/ρ)_medium/(μ_en/ρ)_water, weighted by the
+// beam's energy fluence, Σ ψ_E (μ_en/ρ)_m(E) / Σ ψ_E (μ_en/ρ)_w(E): the ratio of dose to medium
+// to dose to water in the same photon fluence under charged-particle equilibrium (large-photon-
+// detector ratio, Attix, from memory). Coefficients: NIST (Hubbell & Seltzer) via the material
+// library. The primary spectrum at the surface is used (no hardening with depth).
 import type { BeamEnergy } from '../beam/energies';
 import { beamSpectrum, type Spectrum } from '../kernels/spectrum';
 import type { MaterialId } from '../materials/materialLibrary';
