@@ -4,55 +4,36 @@ import { z } from 'zod';
 import { BEAM_ENERGIES } from '../engine/beam/energies';
 import { MATERIAL_IDS } from '../engine/materials/materialLibrary';
 import { buildMeasuredWaterData } from '../engine/beam/measuredTable';
+import { LIMITS, RANGES, rangeProblem, type NumericRange } from '../engine/inputRanges';
 
 export const CASE_FORMAT = 'lamina.case';
 export const CASE_VERSION = 1;
 
-/** Limits that keep inputs physical and inside what the engine is built for. */
-export const LIMITS = {
-  maxDensityGPerCm3: 3,
-  maxLayerThicknessCm: 100,
-  maxPhantomThicknessCm: 100,
-  minDistanceCm: 50,
-  maxDistanceCm: 150,
-  minFieldCm: 1,
-  maxFieldCm: 40,
-  maxLayers: 50,
-  maxPoints: 50,
-} as const;
+// Ranges live in one module shared with the page's fields, the table builder and the command line.
+export { LIMITS } from '../engine/inputRanges';
 
 const finite = (what: string) =>
   z.number({ error: `${what} must be a number` }).refine(Number.isFinite, `${what} must be finite`);
+
+/** A number inside one of the shared ranges, the message naming the field ("SSD must be ≥ 50 cm"). */
+const inRange = (what: string, range: NumericRange) =>
+  z.number({ error: `${what} must be a number` }).superRefine((v, ctx) => {
+    const problem = rangeProblem(v, range);
+    if (problem) ctx.addIssue({ code: 'custom', message: `${what} ${problem}` });
+  });
 
 export const layerSchema = z.strictObject({
   materialId: z.enum(MATERIAL_IDS, {
     error: `unknown material (expected one of ${MATERIAL_IDS.join(', ')})`,
   }),
-  thicknessCm: finite('thickness')
-    .refine((v) => v > 0, 'thickness must be > 0 cm')
-    .refine(
-      (v) => v <= LIMITS.maxLayerThicknessCm,
-      `thickness must be ≤ ${LIMITS.maxLayerThicknessCm} cm`,
-    ),
-  densityGPerCm3: finite('density')
-    .refine((v) => v > 0, 'density must be > 0 g/cm³')
-    .refine(
-      (v) => v <= LIMITS.maxDensityGPerCm3,
-      `density must be ≤ ${LIMITS.maxDensityGPerCm3} g/cm³`,
-    )
-    .optional(),
+  thicknessCm: inRange('thickness', RANGES.layerThicknessCm),
+  densityGPerCm3: inRange('density', RANGES.densityGPerCm3).optional(),
   label: z.string().max(80, 'label must be at most 80 characters').optional(),
 });
 
-const distance = (what: string) =>
-  finite(what)
-    .refine((v) => v >= LIMITS.minDistanceCm, `${what} must be ≥ ${LIMITS.minDistanceCm} cm`)
-    .refine((v) => v <= LIMITS.maxDistanceCm, `${what} must be ≤ ${LIMITS.maxDistanceCm} cm`);
+const distance = (what: string) => inRange(what, RANGES.distanceCm);
 
-const field = (what: string) =>
-  finite(what)
-    .refine((v) => v >= LIMITS.minFieldCm, `${what} must be ≥ ${LIMITS.minFieldCm} cm`)
-    .refine((v) => v <= LIMITS.maxFieldCm, `${what} must be ≤ ${LIMITS.maxFieldCm} cm`);
+const field = (what: string) => inRange(what, RANGES.fieldCm);
 
 export const setupSchema = z.discriminatedUnion(
   'kind',
@@ -114,23 +95,26 @@ export const waterDataSchema = z
       .min(1, 'csv must not be empty')
       .max(500_000, 'csv must be at most 500 000 characters'),
     ssdCm: distance('table SSD').optional(),
-    dMaxCm: finite('d_max')
-      .refine((v) => v > 0 && v < 10, 'd_max must lie in (0, 10) cm')
-      .optional(),
+    dMaxCm: inRange('d_max', RANGES.dMaxCm).optional(),
     scatterFileName: z.string().min(1).max(200).optional(),
     scatterCsv: z
       .string()
       .max(100_000, 'scatter csv must be at most 100 000 characters')
       .optional(),
-    referenceDosePerMuCGy: finite('reference dose rate')
-      .refine((v) => v > 0 && v <= 10, 'reference dose rate must lie in (0, 10] cGy/MU')
-      .optional(),
+    referenceDosePerMuCGy: inRange('reference dose rate', RANGES.referenceDosePerMuCGy).optional(),
   })
   .superRefine((w, ctx) => {
     if (w.kind === 'pdd' && w.ssdCm === undefined) {
       ctx.addIssue({ code: 'custom', path: ['ssdCm'], message: 'a PDD table needs its SSD (cm)' });
       return;
     }
+    // A number out of its range is reported on its own field, not again by the table builder.
+    const ranged: [number | undefined, NumericRange][] = [
+      [w.ssdCm, RANGES.distanceCm],
+      [w.dMaxCm, RANGES.dMaxCm],
+      [w.referenceDosePerMuCGy, RANGES.referenceDosePerMuCGy],
+    ];
+    if (ranged.some(([v, r]) => v !== undefined && rangeProblem(v, r) !== null)) return;
     const built = buildMeasuredWaterData(w);
     if (!built.ok)
       for (const message of built.problems)
