@@ -8,6 +8,7 @@ import type { Verdict } from '../engine/check/tolerance';
 import { describeProblems } from '../io/caseFile';
 import type { PlanCalcOptions } from '../compute/calculatePlan';
 import { calculateDocument, loadDocument } from './checkCommand';
+import { flagProblemsForDocument } from './flagRules';
 import { table } from './formatReport';
 
 export interface BatchRow {
@@ -42,6 +43,8 @@ export function batchRows(files: readonly string[], options: PlanCalcOptions): B
     }
     const doc = loadDocument(text);
     if (!doc.parsed.ok) return invalid(`invalid file\n${describeProblems(doc.parsed.problems)}`);
+    const misfit = flagProblemsForDocument(doc, options.prescription);
+    if (misfit.length > 0) return invalid(misfit.join('\n'));
     const result = calculateDocument(doc, options);
     if (!result) return invalid('not calculated');
     const s = summarizeCheck(result.check);

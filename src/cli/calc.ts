@@ -4,7 +4,8 @@ import { describeProblems } from '../io/caseFile';
 import { parseArgs } from './args';
 import { runBatch } from './batch';
 import { calculateDocument, jsonOf, loadDocument, planOptionsOf, textOf } from './checkCommand';
-import { WATER_TABLE_USAGE, waterTableFromFlags } from './waterTableArgs';
+import { tableNoteLines, WATER_TABLE_USAGE, waterTableFromFlags } from './waterTableArgs';
+import { commandLineProblems, flagProblemsForDocument } from './flagRules';
 import { MC_USAGE, mcOptionsOf } from './mcArgs';
 
 const USAGE = `Usage: npm run calc -- <case.json | plan.json> [--json] [--methods id,id,...]
@@ -30,11 +31,17 @@ function main(argv: string[]): number {
     console.error(USAGE);
     return args.flags.has('help') ? 0 : 2;
   }
+  const flagProblems = commandLineProblems(args);
+  if (flagProblems.length > 0) {
+    console.error(`${flagProblems.join('\n')}\n${USAGE}`);
+    return 2;
+  }
   const table = waterTableFromFlags(args.flags);
   if (table && !table.ok) {
     console.error(`invalid water data\n${table.problems.join('\n')}`);
     return 2;
   }
+  for (const line of tableNoteLines(table)) console.error(line);
   let options;
   try {
     options = {
@@ -58,6 +65,11 @@ function main(argv: string[]): number {
     return 2;
   }
   const doc = loadDocument(text);
+  const misfit = flagProblemsForDocument(doc, options.prescription);
+  if (misfit.length > 0) {
+    console.error(`${file}: ${misfit.join('\n')}`);
+    return 2;
+  }
   const result = calculateDocument(doc, options);
   if (!doc.parsed.ok || !result) {
     const problems = doc.parsed.ok ? [] : doc.parsed.problems;

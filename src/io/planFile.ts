@@ -42,6 +42,16 @@ export function planOfCase(c: LaminaCase): LaminaPlan {
   };
 }
 
+/** The rule for a prescription point: some beam must have it (null when one does). */
+export function prescriptionPointProblem(
+  beams: readonly { case: { points: readonly { id: string }[] } }[],
+  pointId: string,
+): string | null {
+  return beams.some((b) => b.case.points.some((p) => p.id === pointId))
+    ? null
+    : `no beam has a point "${pointId}"`;
+}
+
 function validatePlanDocument(raw: unknown): PlanParseResult {
   const shell = planShellSchema.safeParse(raw);
   if (!shell.success)
@@ -62,12 +72,9 @@ function validatePlanDocument(raw: unknown): PlanParseResult {
     } else beams.push({ ...b, case: c.value });
   });
   const rx = shell.data.prescription;
-  if (
-    rx &&
-    problems.length === 0 &&
-    !beams.some((b) => b.case.points.some((p) => p.id === rx.pointId))
-  )
-    problems.push({ path: 'prescription.pointId', message: `no beam has a point "${rx.pointId}"` });
+  const rxProblem =
+    rx && problems.length === 0 ? prescriptionPointProblem(beams, rx.pointId) : null;
+  if (rxProblem) problems.push({ path: 'prescription.pointId', message: rxProblem });
   if (problems.length > 0) return { ok: false, problems };
   return { ok: true, value: { ...shell.data, beams } };
 }
