@@ -26,7 +26,9 @@ export function curvesCsv(report: CalcReport): string {
     const row: Cell[] = [d, cell(report.radiologicalDepthCm[i])];
     for (const m of report.methods) {
       row.push(cell(m.curve.dosePerMuCGy[i]), cell(m.curve.cf[i]));
-      if (m.curve.sigmaDosePerMuCGy) row.push(cell(m.curve.sigmaDosePerMuCGy[i]));
+      // No σ beside a withheld value (a bin without an uncertainty has no value either).
+      if (m.curve.sigmaDosePerMuCGy)
+        row.push(cell(m.curve.dosePerMuCGy[i] === null ? null : m.curve.sigmaDosePerMuCGy[i]));
     }
     return row;
   });

@@ -77,6 +77,14 @@ describe('CSV exports', () => {
     const back = parse(curvesCsv({ ...report, methods: [m] }));
     expect(back.meta.fields).toContain('stat_sigma_dose_per_mu_cgy');
     back.data.forEach((row, i) => expect(row.stat_sigma_dose_per_mu_cgy).toBe(sigma[i]));
+    // A withheld value (no uncertainty there) has an empty σ cell too, never "value empty, σ 0".
+    const gap: MethodResult = {
+      ...m,
+      curve: { ...m.curve, dosePerMuCGy: m.curve.dosePerMuCGy.map((v, i) => (i === 0 ? null : v)) },
+    };
+    const row0 = parse(curvesCsv({ ...report, methods: [gap] })).data[0]!;
+    expect(row0.stat_dose_per_mu_cgy).toBeNull();
+    expect(row0.stat_sigma_dose_per_mu_cgy).toBeNull();
   });
 
   it('pointCheckCsv(check) and totalCheckCsv(check) parse back to the check values', () => {
