@@ -5,6 +5,7 @@ import { calculateCase, type CalcOptions, type CalcReport } from './calculateCas
 import { waterDataForCase } from './typeAForCase';
 import { ssdCmOf } from '../engine/beam/geometry';
 import { dosePerMuFactors, type DosePerMuFactors } from '../engine/check/dosePerMu';
+import { isBeyondWaterData } from '../engine/beam/waterDataReach';
 import {
   checkPlan,
   type CheckBeamInput,
@@ -73,7 +74,8 @@ export function waterChainsOf(
   const wd = waterDataForCase(c, options.waterData);
   const out: Record<string, DosePerMuFactors> = {};
   if (!wd) return out;
-  for (const p of c.points)
+  // No chain for a point below the table's deepest depth: its TMR would be the table's edge value.
+  for (const p of c.points.filter((q) => !isBeyondWaterData(wd, q.depthCm)))
     out[p.id] = dosePerMuFactors({
       waterData: wd,
       ssdCm: ssdCmOf(c.beam.setup),

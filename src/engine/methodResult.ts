@@ -36,4 +36,9 @@ export interface MethodResult {
   waterData: string;
   curve: MethodCurve;
   points: MethodPoint[];
+  /**
+   * Type A only: geometric depth (cm) from which the method gives no value because it would need
+   * TMR beyond the deepest depth of its water data (absent when the table covers the phantom).
+   */
+  beyondWaterDataFromCm?: number;
 }
