@@ -129,12 +129,16 @@ export const waterDataSchema = z
         });
   });
 
+export const caseNotesSchema = z
+  .string({ error: 'notes must be text' })
+  .max(5000, 'notes must be at most 5000 characters');
+
 export const caseSchema = z
   .strictObject({
     format: z.literal(CASE_FORMAT, { error: `format must be "${CASE_FORMAT}"` }),
     version: z.literal(CASE_VERSION, { error: `version must be ${CASE_VERSION}` }),
     name: z.string({ error: 'name must be text' }).max(200, 'name must be at most 200 characters'),
-    notes: z.string().max(5000, 'notes must be at most 5000 characters').optional(),
+    notes: caseNotesSchema.optional(),
     beam: beamSchema,
     layers: z
       .array(layerSchema, { error: 'layers must be a list' })
