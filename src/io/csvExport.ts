@@ -1,6 +1,6 @@
 // CSV exports of a calculation: the depth curves of every method and the point-check tables
 // (per beam and total). Numbers are written at full precision so the files parse back exactly;
-// a missing value is an empty cell.
+// a missing value is an empty cell; text a spreadsheet would run as a formula is neutralised.
 import Papa from 'papaparse';
 import type { CalcReport } from '../compute/calculateCase';
 import type { PlanCheck } from '../engine/check/planCheck';
@@ -10,8 +10,18 @@ type Cell = string | number | null;
 const cell = (v: number | null | undefined): Cell =>
   v === null || v === undefined || !Number.isFinite(v) ? null : v;
 
+/**
+ * Text that a spreadsheet would read as a formula (leading =, +, -, @, tab or carriage return;
+ * OWASP "CSV injection"): such a cell is written with a leading apostrophe, so it stays text.
+ * Numbers are written as numbers (a negative difference stays a number).
+ */
+export const FORMULA_LIKE = /^[=+\-@\t\r]/;
+
 export function toCsv(fields: string[], rows: Cell[][]): string {
-  return Papa.unparse({ fields, data: rows.map((r) => r.map((c) => (c === null ? '' : c))) });
+  return Papa.unparse(
+    { fields, data: rows.map((r) => r.map((c) => (c === null ? '' : c))) },
+    { escapeFormulae: FORMULA_LIKE },
+  );
 }
 
 /** One row per depth: geometric and radiological depth, then dose per MU and CF of each method (and 1σ where a method has one). */

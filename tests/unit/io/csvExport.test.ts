@@ -145,3 +145,40 @@ describe('CSV exports', () => {
     expect(totals.data[0]?.sigma_dose_cgy).toBeCloseTo(Math.hypot(120 * 0.008, 120 * 0.006), 9);
   });
 });
+
+describe('CSV exports and spreadsheet formulas', () => {
+  const check = (pointId: string, beamId = 'AP') =>
+    checkPlan(
+      [
+        {
+          id: beamId,
+          label: beamId,
+          weight: 1,
+          layers: [{ topCm: 0, bottomCm: 20, relativeElectronDensity: 1 }],
+          points: [{ id: pointId, depthCm: 10, planningMu: 130, planningDoseCGy: 100 }],
+          methods: [{ id: 'water', label: 'water', points: [{ id: pointId, dosePerMuCGy: 0.8 }] }],
+        },
+      ],
+      { tolerances: DEFAULT_TOLERANCES },
+    );
+
+  it.each(['=HYPERLINK("http://x","y")', '+1+1', '-2+3', '@SUM(A1)', '\tx', '\rx', '=1\n2'])(
+    'a point id %j is written with a leading apostrophe (text, not a formula)',
+    (id) => {
+      for (const csv of [pointCheckCsv(check(id)), totalCheckCsv(check(id))]) {
+        const row = parse(csv).data[0]!;
+        expect(row.point).toBe(`'${id}`);
+      }
+      // A beam id too.
+      expect(parse(pointCheckCsv(check('P', id))).data[0]!.beam).toBe(`'${id}`);
+    },
+  );
+
+  it('ordinary ids and negative numbers are written as they are', () => {
+    const rows = parse(pointCheckCsv(check('P1'))).data;
+    expect(rows[0]!.point).toBe('P1');
+    // 100/0.8 = 125 MU against 130: −3.846… %, a number in the file, not text.
+    expect(rows[0]!.mu_diff_percent).toBeCloseTo((100 * (125 - 130)) / 130, 12);
+    expect(pointCheckCsv(check('P1'))).not.toMatch(/'-/);
+  });
+});
