@@ -2,13 +2,13 @@
 // row per case or plan; exit code 1 when any check verdict fails or is uncertain (a Monte Carlo
 // difference within the tolerance ± 2σ: not shown within tolerance), 2 when a file cannot be
 // read or is invalid (problems printed to stderr), else 0.
-import { readFileSync } from 'node:fs';
 import { summarizeCheck } from '../engine/check/checkSummary';
 import type { Verdict } from '../engine/check/tolerance';
 import { describeProblems } from '../io/caseFile';
 import type { PlanCalcOptions } from '../compute/calculatePlan';
 import { calculateDocument, loadDocument } from './checkCommand';
 import { flagProblemsForDocument } from './flagRules';
+import { readTextFileNoting } from './readTextFile';
 import { table } from './formatReport';
 
 export interface BatchRow {
@@ -35,12 +35,9 @@ export function batchRows(files: readonly string[], options: PlanCalcOptions): B
         verdict: 'invalid',
       };
     };
-    let text: string;
-    try {
-      text = readFileSync(file, 'utf8');
-    } catch (e) {
-      return invalid(`cannot read (${(e as Error).message})`);
-    }
+    const read = readTextFileNoting(file);
+    if (!read.ok) return invalid(read.problem);
+    const text = read.text;
     const doc = loadDocument(text);
     if (!doc.parsed.ok) return invalid(`invalid file\n${describeProblems(doc.parsed.problems)}`);
     const misfit = flagProblemsForDocument(doc, options.prescription);

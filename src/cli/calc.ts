@@ -1,11 +1,11 @@
 // `npm run calc -- <case.json> [--json] [--methods id,id,…]`: the same engine as the page, in Node.
-import { readFileSync } from 'node:fs';
 import { describeProblems } from '../io/caseFile';
 import { parseArgs } from './args';
 import { runBatch } from './batch';
 import { calculateDocument, jsonOf, loadDocument, planOptionsOf, textOf } from './checkCommand';
 import { tableNoteLines, WATER_TABLE_USAGE, waterTableFromFlags } from './waterTableArgs';
 import { commandLineProblems, flagProblemsForDocument } from './flagRules';
+import { readTextFileNoting } from './readTextFile';
 import { MC_USAGE, mcOptionsOf } from './mcArgs';
 
 const USAGE = `Usage: npm run calc -- <case.json | plan.json> [--json] [--methods id,id,...]
@@ -57,13 +57,12 @@ function main(argv: string[]): number {
   if (args.flags.get('batch') === true || args.files.length > 1)
     return runBatch(args.files, options, json);
   const file = args.files[0] as string;
-  let text: string;
-  try {
-    text = readFileSync(file, 'utf8');
-  } catch (e) {
-    console.error(`${file}: cannot read (${(e as Error).message})`);
+  const read = readTextFileNoting(file);
+  if (!read.ok) {
+    console.error(`${file}: ${read.problem}`);
     return 2;
   }
+  const text = read.text;
   const doc = loadDocument(text);
   const misfit = flagProblemsForDocument(doc, options.prescription);
   if (misfit.length > 0) {

@@ -1,6 +1,6 @@
 // Water-data options of the command line: --tmr FILE | --pdd FILE --ssd CM, --scatter FILE,
 // --dmax CM, --ref-dose CGY_PER_MU. Reads the files and builds the measured-table WaterData.
-import { readFileSync } from 'node:fs';
+import { readTextFileNoting } from './readTextFile';
 import { basename } from 'node:path';
 import {
   buildMeasuredWaterData,
@@ -46,12 +46,10 @@ function numberFlag(
 }
 
 function readText(path: string, problems: string[]): string {
-  try {
-    return readFileSync(path, 'utf8');
-  } catch (e) {
-    problems.push(`${path}: cannot read (${(e as Error).message})`);
-    return '';
-  }
+  const r = readTextFileNoting(path);
+  if (r.ok) return r.text;
+  problems.push(`${path}: ${r.problem}`);
+  return '';
 }
 
 /** The water data asked for on the command line: none, or a built table / its problems. */
