@@ -192,7 +192,7 @@ describe('type-A invariants', () => {
           .slice(0, (n < 0 ? p.layers.length - 1 : n) + 1)
           .some(
             (l, m) =>
-              d - l.topCm < wd.dMaxCm &&
+              d - l.topCm < wd.dMaxCm - 1e-9 &&
               Math.abs(
                 l.relativeElectronDensity - (p.layers[m - 1]?.relativeElectronDensity ?? 1),
               ) >= BATHO_WITHHELD_MIN_DELTA_RHO,

@@ -85,7 +85,8 @@ export function unshiftedBathoUndefinedAt(
     const deltaRho = layer.relativeElectronDensity - previousRho;
     previousRho = layer.relativeElectronDensity;
     if (Math.abs(deltaRho) < BATHO_WITHHELD_MIN_DELTA_RHO) continue;
-    if (pointDepthCm - layer.topCm < dMaxCm) found = { interfaceCm: layer.topCm, deltaRho };
+    // 1e-9 cm: a point d_max below an interface, as summed layer tops round, is not within it.
+    if (pointDepthCm - layer.topCm < dMaxCm - 1e-9) found = { interfaceCm: layer.topCm, deltaRho };
   }
   return found;
 }
