@@ -129,6 +129,28 @@ export const waterDataSchema = z
         });
   });
 
+/** A depth in cm for a message: two decimals, or enough digits for a sliver thinner than 0.01 cm. */
+function cmText(v: number): string {
+  return v >= 0.01 ? v.toFixed(2) : String(Number(v.toPrecision(3)));
+}
+
+/** Duplicate point ids (the points may be partly invalid: only text ids are compared). */
+function checkDuplicatePointIds(points: unknown, ctx: z.RefinementCtx): void {
+  if (!Array.isArray(points)) return;
+  const seen = new Set<string>();
+  points.forEach((p: unknown, i) => {
+    const id = typeof p === 'object' && p !== null ? (p as { id?: unknown }).id : undefined;
+    if (typeof id !== 'string') return;
+    if (seen.has(id))
+      ctx.addIssue({
+        code: 'custom',
+        path: ['points', i, 'id'],
+        message: `duplicate point id "${id}"`,
+      });
+    seen.add(id);
+  });
+}
+
 export const caseNotesSchema = z
   .string({ error: 'notes must be text' })
   .max(5000, 'notes must be at most 5000 characters');
@@ -142,47 +164,48 @@ export const caseSchema = z
     beam: beamSchema,
     layers: z
       .array(layerSchema, { error: 'layers must be a list' })
-      .min(1, 'layers: at least one layer is needed')
-      .max(LIMITS.maxLayers, `layers: at most ${LIMITS.maxLayers} layers`),
+      .min(1, 'at least one layer is needed')
+      .max(LIMITS.maxLayers, `at most ${LIMITS.maxLayers} layers`),
     points: z
       .array(pointSchema, { error: 'points must be a list' })
-      .max(LIMITS.maxPoints, `points: at most ${LIMITS.maxPoints} points`),
+      .max(LIMITS.maxPoints, `at most ${LIMITS.maxPoints} points`),
     /** Measured water data (optional; type-A methods need water data). */
     waterData: waterDataSchema.optional(),
   })
   .superRefine((c, ctx) => {
+    // Depths are checked against the phantom only when every layer is valid: a total built from
+    // an invalid thickness would give ranges like "(0–-5.00 cm)".
+    const layersValid =
+      Array.isArray(c.layers) &&
+      c.layers.length > 0 &&
+      c.layers.every((l) => layerSchema.safeParse(l).success);
+    if (!layersValid) {
+      checkDuplicatePointIds(c.points, ctx);
+      return;
+    }
     const total = c.layers.reduce((s, l) => s + l.thicknessCm, 0);
     if (total > LIMITS.maxPhantomThicknessCm + 1e-9)
       ctx.addIssue({
         code: 'custom',
         path: ['layers'],
-        message: `total thickness ${total.toFixed(2)} cm exceeds ${LIMITS.maxPhantomThicknessCm} cm`,
+        message: `total thickness ${cmText(total)} cm exceeds ${LIMITS.maxPhantomThicknessCm} cm`,
       });
     c.points.forEach((p, i) => {
       if (p.depthCm > total + 1e-9)
         ctx.addIssue({
           code: 'custom',
           path: ['points', i, 'depthCm'],
-          message: `depth ${p.depthCm} cm is outside the phantom (0–${total.toFixed(2)} cm)`,
+          message: `depth ${p.depthCm} cm is outside the phantom (0–${cmText(total)} cm)`,
         });
     });
-    const seen = new Set<string>();
-    c.points.forEach((p, i) => {
-      if (seen.has(p.id))
-        ctx.addIssue({
-          code: 'custom',
-          path: ['points', i, 'id'],
-          message: `duplicate point id "${p.id}"`,
-        });
-      seen.add(p.id);
-    });
+    checkDuplicatePointIds(c.points, ctx);
     if (c.beam.setup.kind === 'SAD') {
       const { sadCm, isocentreDepthCm } = c.beam.setup;
       if (isocentreDepthCm > total + 1e-9)
         ctx.addIssue({
           code: 'custom',
           path: ['beam', 'setup', 'isocentreDepthCm'],
-          message: `isocentre depth ${isocentreDepthCm} cm is outside the phantom (0–${total.toFixed(2)} cm)`,
+          message: `isocentre depth ${isocentreDepthCm} cm is outside the phantom (0–${cmText(total)} cm)`,
         });
       if (sadCm - isocentreDepthCm < LIMITS.minDistanceCm)
         ctx.addIssue({

@@ -3,6 +3,7 @@
 // "beams[1].case.layers[0].thicknessCm". A single-beam case file opens as a one-beam plan.
 import { formatPath, validateCase, type CaseProblem } from './caseFile';
 import { CASE_FORMAT, type LaminaCase } from './caseSchema';
+import { issueText } from './issueText';
 import {
   PLAN_FORMAT,
   PLAN_VERSION,
@@ -53,7 +54,7 @@ export function prescriptionPointProblem(
 }
 
 function validatePlanDocument(raw: unknown): PlanParseResult {
-  const shell = planShellSchema.safeParse(raw);
+  const shell = planShellSchema.safeParse(raw, { error: issueText });
   if (!shell.success)
     return {
       ok: false,

@@ -146,7 +146,9 @@ export function measuredTableNumberProblems(
   const out: string[] = [];
   const check = (what: string, v: number | undefined, range: NumericRange) => {
     const p = v === undefined ? null : rangeProblem(v, range);
-    if (p) out.push(`${input.fileName}: ${what} ${v}${range.unit ? ` ${range.unit}` : ''}: ${p}`);
+    const shown =
+      v !== undefined && Number.isFinite(v) ? ` ${v}${range.unit ? ` ${range.unit}` : ''}` : '';
+    if (p) out.push(`${input.fileName}: ${what}${shown}: ${p}`);
   };
   if (input.kind === 'pdd' && input.ssdCm === undefined)
     out.push(`${input.fileName}: a PDD table needs its SSD (cm)`);
