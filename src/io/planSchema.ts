@@ -3,6 +3,7 @@
 // optional prescription at a shared point and the check tolerances. Points are matched by id
 // across beams. A single-beam case file stays valid on its own and lifts into a one-beam plan.
 import { z } from 'zod';
+import { METHOD_IDS } from '../engine/equilibrium/warning';
 
 export const PLAN_FORMAT = 'lamina.plan';
 export const PLAN_VERSION = 1;
@@ -52,7 +53,9 @@ export const planShellSchema = z
     prescription: prescriptionSchema.optional(),
     tolerances: tolerancesSchema.optional(),
     /** Method whose verdict decides the check (a preferred available method when absent). */
-    checkMethodId: z.string().max(40).optional(),
+    checkMethodId: z
+      .enum(METHOD_IDS, { error: `unknown method (expected one of ${METHOD_IDS.join(', ')})` })
+      .optional(),
   })
   .superRefine((p, ctx) => {
     const seen = new Set<string>();
