@@ -6,7 +6,8 @@ export interface ParsedArgs {
 }
 
 /** Flags that take no value. */
-const BOOLEAN_FLAGS = new Set(['json', 'help', 'batch', 'jsonl']);
+export const BOOLEAN_FLAGS = ['json', 'help', 'batch', 'jsonl'] as const;
+const BOOLEAN = new Set<string>(BOOLEAN_FLAGS);
 
 export function parseArgs(argv: readonly string[]): ParsedArgs {
   const files: string[] = [];
@@ -16,7 +17,7 @@ export function parseArgs(argv: readonly string[]): ParsedArgs {
     if (a.startsWith('--')) {
       const [name, inline] = a.slice(2).split('=', 2) as [string, string | undefined];
       if (inline !== undefined) flags.set(name, inline);
-      else if (BOOLEAN_FLAGS.has(name)) flags.set(name, true);
+      else if (BOOLEAN.has(name)) flags.set(name, true);
       else {
         const next = argv[i + 1];
         if (next === undefined || next.startsWith('--')) throw new Error(`--${name} needs a value`);

@@ -2,11 +2,12 @@
 // row per case or plan; exit code 1 when any check verdict fails or is uncertain (a Monte Carlo
 // difference within the tolerance ± 2σ: not shown within tolerance), 2 when a file cannot be
 // read or is invalid (problems printed to stderr), else 0.
-import { readFileSync } from 'node:fs';
 import { summarizeCheck } from '../engine/check/checkSummary';
 import type { Verdict } from '../engine/check/tolerance';
 import { describeProblems } from '../io/caseFile';
 import { calculateDocument, jsonOf, loadDocument, type CliCalc } from './checkCommand';
+import { flagProblemsForDocument } from './flagRules';
+import { readTextFileNoting } from './readTextFile';
 import { table } from './formatReport';
 
 export interface BatchRow {
@@ -33,13 +34,12 @@ export function batchRows(files: readonly string[], calc: CliCalc): BatchRow[] {
         verdict: 'invalid',
       };
     };
-    let text: string;
-    try {
-      text = readFileSync(file, 'utf8');
-    } catch (e) {
-      return invalid(`cannot read (${(e as Error).message})`);
-    }
-    const answer = calculateDocument(loadDocument(text), calc);
+    const read = readTextFileNoting(file);
+    if (!read.ok) return invalid(read.problem);
+    const doc = loadDocument(read.text);
+    const misfit = flagProblemsForDocument(doc, calc.options.prescription);
+    if (misfit.length > 0) return invalid(misfit.join('\n'));
+    const answer = calculateDocument(doc, calc);
     if (!answer.ok) return invalid(`invalid file\n${describeProblems(answer.problems)}`);
     const result = answer.report;
     const s = summarizeCheck(result.check);
@@ -96,20 +96,17 @@ export function runJsonLines(files: readonly string[], calc: CliCalc): number {
   let invalid = 0;
   for (const file of files) {
     let line: unknown;
-    let text: string | null = null;
-    try {
-      text = readFileSync(file, 'utf8');
-    } catch (e) {
-      line = {
-        file,
-        problems: [{ path: '(file)', message: `cannot read (${(e as Error).message})` }],
-      };
-    }
-    if (text !== null) {
-      const answer = calculateDocument(loadDocument(text), calc);
-      line = answer.ok
-        ? { file, document: jsonOf(answer.report, answer.isPlan) }
-        : { file, problems: answer.problems };
+    const read = readTextFileNoting(file);
+    if (!read.ok) line = { file, problems: [{ path: '(file)', message: read.problem }] };
+    else {
+      const doc = loadDocument(read.text);
+      const misfit = flagProblemsForDocument(doc, calc.options.prescription);
+      const answer = misfit.length > 0 ? null : calculateDocument(doc, calc);
+      line = !answer
+        ? { file, problems: misfit.map((message) => ({ path: '--prescribe', message })) }
+        : answer.ok
+          ? { file, document: jsonOf(answer.report, answer.isPlan) }
+          : { file, problems: answer.problems };
     }
     if ((line as { problems?: unknown }).problems) invalid += 1;
     process.stdout.write(`${JSON.stringify(line)}\n`);

@@ -1,6 +1,5 @@
 // `npm run calc -- <case.json> [--json] [--methods id,id,…]`: the same calculation contract as the
 // page (src/compute/calcRequest.ts), in Node.
-import { readFileSync } from 'node:fs';
 import { describeProblems } from '../io/caseFile';
 import { PLAN_FORMAT } from '../io/planSchema';
 import { parseArgs } from './args';
@@ -15,7 +14,9 @@ import {
   WATER_DATA_USAGE,
   type CliCalc,
 } from './checkCommand';
-import { WATER_TABLE_USAGE, waterTableFromFlags } from './waterTableArgs';
+import { tableNoteLines, WATER_TABLE_USAGE, waterTableFromFlags } from './waterTableArgs';
+import { commandLineProblems, flagProblemsForDocument } from './flagRules';
+import { readTextFileNoting } from './readTextFile';
 import { MC_USAGE, mcOptionsOf } from './mcArgs';
 
 const USAGE = `Usage: npm run calc -- <case.json | plan.json> [--json] [--methods id,id,...]
@@ -46,11 +47,17 @@ function main(argv: string[]): number {
     console.error(USAGE);
     return args.flags.has('help') ? 0 : 2;
   }
+  const flagProblems = commandLineProblems(args);
+  if (flagProblems.length > 0) {
+    console.error(`${flagProblems.join('\n')}\n${USAGE}`);
+    return 2;
+  }
   const table = waterTableFromFlags(args.flags);
   if (table && !table.ok) {
     console.error(`invalid water data\n${table.problems.join('\n')}`);
     return 2;
   }
+  for (const line of tableNoteLines(table)) console.error(line);
   let calc: CliCalc;
   try {
     calc = {
@@ -69,14 +76,17 @@ function main(argv: string[]): number {
   if (args.flags.get('batch') === true || args.files.length > 1)
     return runBatch(args.files, calc, json);
   const file = args.files[0] as string;
-  let text: string;
-  try {
-    text = readFileSync(file, 'utf8');
-  } catch (e) {
-    console.error(`${file}: cannot read (${(e as Error).message})`);
+  const read = readTextFileNoting(file);
+  if (!read.ok) {
+    console.error(`${file}: ${read.problem}`);
     return 2;
   }
-  const doc = loadDocument(text);
+  const doc = loadDocument(read.text);
+  const misfit = flagProblemsForDocument(doc, calc.options.prescription);
+  if (misfit.length > 0) {
+    console.error(`${file}: ${misfit.join('\n')}`);
+    return 2;
+  }
   const answer = calculateDocument(doc, calc);
   if (!answer.ok) {
     const isPlan = doc.ok && (doc.raw as { format?: unknown } | null)?.format === PLAN_FORMAT;

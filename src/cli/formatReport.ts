@@ -71,7 +71,9 @@ export function formatReport(r: CalcReport): string {
           num(p.depthCm, 2),
           num(p.cf, 4),
           num(p.dosePerMuCGy, 4),
-          p.sigmaDosePerMuCGy === undefined ? '' : num(p.sigmaDosePerMuCGy, 4),
+          p.sigmaDosePerMuCGy === undefined || p.dosePerMuCGy === null
+            ? ''
+            : num(p.sigmaDosePerMuCGy, 4),
           p.flags.join(', '),
         ]),
       ),

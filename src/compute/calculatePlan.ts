@@ -12,6 +12,7 @@ import {
 import { ssdCmOf } from '../engine/beam/geometry';
 import type { WaterData } from '../engine/beam/waterData';
 import { dosePerMuFactors, type DosePerMuFactors } from '../engine/check/dosePerMu';
+import { isBeyondWaterData } from '../engine/beam/waterDataReach';
 import { checkPlan, type CheckBeamInput } from '../engine/check/planCheck';
 import { DEFAULT_TOLERANCES } from '../engine/check/tolerance';
 import type { LaminaPlan } from '../io/planFile';
@@ -73,7 +74,8 @@ export function waterChainsOf(
 ): Record<string, DosePerMuFactors> {
   const out: Record<string, DosePerMuFactors> = {};
   if (!waterData) return out;
-  for (const p of c.points)
+  // No chain for a point below the table's deepest depth: its TMR would be the table's edge value.
+  for (const p of c.points.filter((q) => !isBeyondWaterData(waterData, q.depthCm)))
     out[p.id] = dosePerMuFactors({
       waterData,
       ssdCm: ssdCmOf(c.beam.setup),

@@ -32,7 +32,7 @@ import { resolveWater, waterKeyOf, type WaterSourceSpec } from './waterSource';
 import type { McOptions } from '../engine/montecarlo/monteCarloPlan';
 import { validateCase } from '../io/caseFile';
 import type { LaminaCase } from '../io/caseSchema';
-import { validatePlan } from '../io/planFile';
+import { prescriptionPointProblem, validatePlan } from '../io/planFile';
 import { PLAN_FORMAT } from '../io/planSchema';
 import type { CalcReport, PlanReport } from '../contract/reports';
 
@@ -150,6 +150,11 @@ export function calculateCaseRequest(req: CaseRequest): CaseAnswer {
 export function calculatePlanRequest(req: PlanRequest): PlanAnswer {
   const v = validatePlan(req.plan);
   if (!v.ok) return v;
+  // A prescription given with the request (CLI --prescribe) obeys the plan file's own rule.
+  const rx = req.options?.prescription;
+  const rxProblem = rx ? prescriptionPointProblem(v.value.beams, rx.pointId) : null;
+  if (rxProblem)
+    return { ok: false, problems: [{ path: 'prescription.pointId', message: rxProblem }] };
   for (const b of v.value.beams) {
     const bad = waterProblems(b.case, req.water);
     if (bad) return bad;

@@ -5,6 +5,7 @@ import { ssdCmOf } from '../engine/beam/geometry';
 import type { WaterData } from '../engine/beam/waterData';
 import {
   beamQualityOfWaterData,
+  beyondWaterDataOfMethods,
   equilibriumWarnings,
   extrapolationEventsOfMethods,
   type ExtrapolationEvent,
@@ -35,5 +36,6 @@ export function caseWarnings(
     qualitySource: quality?.source,
     points: c.points.map((p) => ({ id: p.id, depthCm: p.depthCm })),
     extrapolations: [...extrapolationEventsOfMethods(methods), ...extraExtrapolations],
+    beyondWaterData: beyondWaterDataOfMethods(methods, waterData),
   });
 }

@@ -40,4 +40,9 @@ export interface MethodResult {
   points: MethodPoint[];
   /** Dose to water or to medium, and how it was converted (set by dose/doseConversion.ts). */
   dose?: DoseNote;
+  /**
+   * Type A only: geometric depth (cm) from which the method gives no value because it would need
+   * TMR beyond the deepest depth of its water data (absent when the table covers the phantom).
+   */
+  beyondWaterDataFromCm?: number;
 }

@@ -2,6 +2,7 @@
 // each naming its field path. Nothing is coerced: a value that breaks a rule is reported.
 import { CASE_FORMAT, CASE_VERSION, caseSchema, type LaminaCase } from './caseSchema';
 import { migrateCase } from './caseMigrations';
+import { issueText } from './issueText';
 
 export interface CaseProblem {
   /** Field path, e.g. "layers[2].thicknessCm" ("(file)" for the document as a whole). */
@@ -23,7 +24,7 @@ export function formatPath(path: readonly PropertyKey[]): string {
 export function validateCase(raw: unknown): CaseParseResult {
   const migrated = migrateCase(raw);
   if (!migrated.ok) return migrated;
-  const r = caseSchema.safeParse(migrated.value);
+  const r = caseSchema.safeParse(migrated.value, { error: issueText });
   if (r.success) return { ok: true, value: r.data };
   return {
     ok: false,

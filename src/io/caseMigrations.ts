@@ -67,6 +67,15 @@ export const MIGRATIONS: Record<number, Migration> = { 1: planningMuToBeam };
 
 export type MigrationResult = { ok: true; value: unknown } | { ok: false; problems: CaseProblem[] };
 
+/** A found value for a message: short JSON for plain values, a word for the rest. */
+function foundText(v: unknown): string {
+  if (v === undefined) return 'none';
+  if (Array.isArray(v)) return 'a list';
+  if (typeof v === 'object' && v !== null) return 'an object';
+  const t = JSON.stringify(v);
+  return t.length > 40 ? `${t.slice(0, 37)}…` : t;
+}
+
 export function migrateCase(raw: unknown): MigrationResult {
   if (typeof raw !== 'object' || raw === null || Array.isArray(raw))
     return {
@@ -80,7 +89,7 @@ export function migrateCase(raw: unknown): MigrationResult {
       problems: [
         {
           path: 'format',
-          message: `format must be "${CASE_FORMAT}" (found ${JSON.stringify(doc.format)})`,
+          message: `format must be "${CASE_FORMAT}" (found ${foundText(doc.format)})`,
         },
       ],
     };
@@ -96,7 +105,7 @@ export function migrateCase(raw: unknown): MigrationResult {
       problems: [
         {
           path: 'version',
-          message: `unknown version ${JSON.stringify(version)} (this Lamina reads versions 1–${CASE_VERSION})`,
+          message: `${version === undefined ? 'version missing' : `unknown version ${foundText(version)}`} (this Lamina reads versions 1–${CASE_VERSION})`,
         },
       ],
     };

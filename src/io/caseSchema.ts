@@ -7,64 +7,42 @@ import { caseCheckSchema } from './checkSettingsSchema';
 import { BEAM_ENERGIES } from '../engine/beam/energies';
 import { MATERIAL_IDS } from '../engine/materials/materialLibrary';
 import { buildMeasuredWaterData } from '../engine/beam/measuredTable';
+import {
+  LIMITS,
+  planningDoseProblem,
+  RANGES,
+  rangeProblem,
+  type NumericRange,
+} from '../engine/inputRanges';
 
 export const CASE_FORMAT = 'lamina.case';
 export const CASE_VERSION = 2;
 
-/** Limits that keep inputs physical and inside what the engine is built for. */
-export const LIMITS = {
-  maxDensityGPerCm3: 3,
-  maxLayerThicknessCm: 100,
-  maxPhantomThicknessCm: 100,
-  minDistanceCm: 50,
-  maxDistanceCm: 150,
-  minFieldCm: 1,
-  maxFieldCm: 40,
-  maxLayers: 50,
-  maxPoints: 50,
-  /**
-   * Thinnest layer (cm): 10 µm, far below a CT voxel or a film; thinner "layers" only carry
-   * rounding (1e-323 cm gave a non-finite superposition curve).
-   */
-  minLayerThicknessCm: 0.001,
-} as const;
+// Ranges live in one module shared with the page's fields, the table builder and the command line.
+export { LIMITS } from '../engine/inputRanges';
 
 const finite = (what: string) =>
   z.number({ error: `${what} must be a number` }).refine(Number.isFinite, `${what} must be finite`);
+
+/** A number inside one of the shared ranges, the message naming the field ("SSD must be ≥ 50 cm"). */
+const inRange = (what: string, range: NumericRange) =>
+  z.number({ error: `${what} must be a number` }).superRefine((v, ctx) => {
+    const problem = rangeProblem(v, range);
+    if (problem) ctx.addIssue({ code: 'custom', message: `${what} ${problem}` });
+  });
 
 export const layerSchema = z.strictObject({
   materialId: z.enum(MATERIAL_IDS, {
     error: `unknown material (expected one of ${MATERIAL_IDS.join(', ')})`,
   }),
-  thicknessCm: finite('thickness')
-    .refine((v) => v > 0, 'thickness must be > 0 cm')
-    .refine(
-      (v) => v >= LIMITS.minLayerThicknessCm,
-      `thickness must be ≥ ${LIMITS.minLayerThicknessCm} cm`,
-    )
-    .refine(
-      (v) => v <= LIMITS.maxLayerThicknessCm,
-      `thickness must be ≤ ${LIMITS.maxLayerThicknessCm} cm`,
-    ),
-  densityGPerCm3: finite('density')
-    .refine((v) => v > 0, 'density must be > 0 g/cm³')
-    .refine(
-      (v) => v <= LIMITS.maxDensityGPerCm3,
-      `density must be ≤ ${LIMITS.maxDensityGPerCm3} g/cm³`,
-    )
-    .optional(),
+  thicknessCm: inRange('thickness', RANGES.layerThicknessCm),
+  densityGPerCm3: inRange('density', RANGES.densityGPerCm3).optional(),
   label: z.string().max(80, 'label must be at most 80 characters').optional(),
 });
 
-const distance = (what: string) =>
-  finite(what)
-    .refine((v) => v >= LIMITS.minDistanceCm, `${what} must be ≥ ${LIMITS.minDistanceCm} cm`)
-    .refine((v) => v <= LIMITS.maxDistanceCm, `${what} must be ≤ ${LIMITS.maxDistanceCm} cm`);
+const distance = (what: string) => inRange(what, RANGES.distanceCm);
 
-const field = (what: string) =>
-  finite(what)
-    .refine((v) => v >= LIMITS.minFieldCm, `${what} must be ≥ ${LIMITS.minFieldCm} cm`)
-    .refine((v) => v <= LIMITS.maxFieldCm, `${what} must be ≤ ${LIMITS.maxFieldCm} cm`);
+const field = (what: string) => inRange(what, RANGES.fieldCm);
 
 export const setupSchema = z.discriminatedUnion(
   'kind',
@@ -107,9 +85,12 @@ export const pointSchema = z.strictObject({
     .max(40, 'point id must be at most 40 characters'),
   depthCm: finite('depth').refine((v) => v >= 0, 'depth must be ≥ 0 cm'),
   /** Dose per fraction from the planning system at this point from this beam (cGy), for comparison. */
-  planningDoseCGy: finite('planning dose')
-    .refine((v) => v >= 0, 'planning dose must be ≥ 0 cGy')
-    .refine((v) => v === 0 || v >= 0.001, 'planning dose must be 0 (none) or ≥ 0.001 cGy')
+  planningDoseCGy: z
+    .number({ error: 'planning dose must be a number' })
+    .superRefine((v, ctx) => {
+      const problem = planningDoseProblem(v);
+      if (problem) ctx.addIssue({ code: 'custom', message: `planning dose ${problem}` });
+    })
     .optional(),
 });
 
@@ -130,23 +111,26 @@ export const waterDataSchema = z
       .min(1, 'csv must not be empty')
       .max(500_000, 'csv must be at most 500 000 characters'),
     ssdCm: distance('table SSD').optional(),
-    dMaxCm: finite('d_max')
-      .refine((v) => v > 0 && v < 10, 'd_max must lie in (0, 10) cm')
-      .optional(),
+    dMaxCm: inRange('d_max', RANGES.dMaxCm).optional(),
     scatterFileName: z.string().min(1).max(200).optional(),
     scatterCsv: z
       .string()
       .max(100_000, 'scatter csv must be at most 100 000 characters')
       .optional(),
-    referenceDosePerMuCGy: finite('reference dose rate')
-      .refine((v) => v > 0 && v <= 10, 'reference dose rate must lie in (0, 10] cGy/MU')
-      .optional(),
+    referenceDosePerMuCGy: inRange('reference dose rate', RANGES.referenceDosePerMuCGy).optional(),
   })
   .superRefine((w, ctx) => {
     if (w.kind === 'pdd' && w.ssdCm === undefined) {
       ctx.addIssue({ code: 'custom', path: ['ssdCm'], message: 'a PDD table needs its SSD (cm)' });
       return;
     }
+    // A number out of its range is reported on its own field, not again by the table builder.
+    const ranged: [number | undefined, NumericRange][] = [
+      [w.ssdCm, RANGES.distanceCm],
+      [w.dMaxCm, RANGES.dMaxCm],
+      [w.referenceDosePerMuCGy, RANGES.referenceDosePerMuCGy],
+    ];
+    if (ranged.some(([v, r]) => v !== undefined && rangeProblem(v, r) !== null)) return;
     const built = buildMeasuredWaterData(w);
     if (!built.ok)
       for (const message of built.problems)
@@ -161,51 +145,78 @@ export const waterDataSchema = z
         });
   });
 
+/** A depth in cm for a message: two decimals, or enough digits for a sliver thinner than 0.01 cm. */
+function cmText(v: number): string {
+  return v >= 0.01 ? v.toFixed(2) : String(Number(v.toPrecision(3)));
+}
+
+/** Duplicate point ids (the points may be partly invalid: only text ids are compared). */
+function checkDuplicatePointIds(points: unknown, ctx: z.RefinementCtx): void {
+  if (!Array.isArray(points)) return;
+  const seen = new Set<string>();
+  points.forEach((p: unknown, i) => {
+    const id = typeof p === 'object' && p !== null ? (p as { id?: unknown }).id : undefined;
+    if (typeof id !== 'string') return;
+    if (seen.has(id))
+      ctx.addIssue({
+        code: 'custom',
+        path: ['points', i, 'id'],
+        message: `duplicate point id "${id}"`,
+      });
+    seen.add(id);
+  });
+}
+
+export const caseNotesSchema = z
+  .string({ error: 'notes must be text' })
+  .max(5000, 'notes must be at most 5000 characters');
+
 export const caseSchema = z
   .strictObject({
     format: z.literal(CASE_FORMAT, { error: `format must be "${CASE_FORMAT}"` }),
     version: z.literal(CASE_VERSION, { error: `version must be ${CASE_VERSION}` }),
     name: z.string({ error: 'name must be text' }).max(200, 'name must be at most 200 characters'),
-    notes: z.string().max(5000, 'notes must be at most 5000 characters').optional(),
+    notes: caseNotesSchema.optional(),
     beam: beamSchema,
     layers: z
       .array(layerSchema, { error: 'layers must be a list' })
-      .min(1, 'layers: at least one layer is needed')
-      .max(LIMITS.maxLayers, `layers: at most ${LIMITS.maxLayers} layers`),
+      .min(1, 'at least one layer is needed')
+      .max(LIMITS.maxLayers, `at most ${LIMITS.maxLayers} layers`),
     points: z
       .array(pointSchema, { error: 'points must be a list' })
-      .max(LIMITS.maxPoints, `points: at most ${LIMITS.maxPoints} points`),
+      .max(LIMITS.maxPoints, `at most ${LIMITS.maxPoints} points`),
     /** Measured water data (optional; type-A methods need water data). */
     waterData: waterDataSchema.optional(),
     /** The check's settings saved with the case (prescription, tolerances, method, dose convention). */
     check: caseCheckSchema.optional(),
   })
   .superRefine((c, ctx) => {
+    // Depths are checked against the phantom only when every layer is valid: a total built from
+    // an invalid thickness would give ranges like "(0–-5.00 cm)".
+    const layersValid =
+      Array.isArray(c.layers) &&
+      c.layers.length > 0 &&
+      c.layers.every((l) => layerSchema.safeParse(l).success);
+    if (!layersValid) {
+      checkDuplicatePointIds(c.points, ctx);
+      return;
+    }
     const total = c.layers.reduce((s, l) => s + l.thicknessCm, 0);
     if (total > LIMITS.maxPhantomThicknessCm + 1e-9)
       ctx.addIssue({
         code: 'custom',
         path: ['layers'],
-        message: `total thickness ${total.toFixed(2)} cm exceeds ${LIMITS.maxPhantomThicknessCm} cm`,
+        message: `total thickness ${cmText(total)} cm exceeds ${LIMITS.maxPhantomThicknessCm} cm`,
       });
     c.points.forEach((p, i) => {
       if (p.depthCm > total + 1e-9)
         ctx.addIssue({
           code: 'custom',
           path: ['points', i, 'depthCm'],
-          message: `depth ${p.depthCm} cm is outside the phantom (0–${total.toFixed(2)} cm)`,
+          message: `depth ${p.depthCm} cm is outside the phantom (0–${cmText(total)} cm)`,
         });
     });
-    const seen = new Set<string>();
-    c.points.forEach((p, i) => {
-      if (seen.has(p.id))
-        ctx.addIssue({
-          code: 'custom',
-          path: ['points', i, 'id'],
-          message: `duplicate point id "${p.id}"`,
-        });
-      seen.add(p.id);
-    });
+    checkDuplicatePointIds(c.points, ctx);
     const rx = c.check?.prescription;
     if (rx && !c.points.some((p) => p.id === rx.pointId))
       ctx.addIssue({
@@ -219,7 +230,7 @@ export const caseSchema = z
         ctx.addIssue({
           code: 'custom',
           path: ['beam', 'setup', 'isocentreDepthCm'],
-          message: `isocentre depth ${isocentreDepthCm} cm is outside the phantom (0–${total.toFixed(2)} cm)`,
+          message: `isocentre depth ${isocentreDepthCm} cm is outside the phantom (0–${cmText(total)} cm)`,
         });
       if (sadCm - isocentreDepthCm < LIMITS.minDistanceCm)
         ctx.addIssue({

@@ -3,6 +3,7 @@
 // level; both use these rules, so a message names the same field wherever it sits.
 import { z } from 'zod';
 import { DOSE_QUANTITIES } from '../engine/dose/doseQuantity';
+import { METHOD_IDS } from '../engine/methodRegistry';
 
 const finite = (what: string) =>
   z.number({ error: `${what} must be a number` }).refine(Number.isFinite, `${what} must be finite`);
@@ -24,10 +25,10 @@ export const prescriptionSchema = z.strictObject({
   doseCGy: finite('prescribed dose').refine((v) => v > 0, 'prescribed dose must be > 0 cGy'),
 });
 
-export const checkMethodIdSchema = z
-  .string({ error: 'check method must be a method id' })
-  .min(1, 'check method must not be empty')
-  .max(40, 'check method must be at most 40 characters');
+/** A method id of the registry: an unknown one is refused (it fell back to the default silently). */
+export const checkMethodIdSchema = z.enum(METHOD_IDS, {
+  error: `unknown method (expected one of ${METHOD_IDS.join(', ')})`,
+});
 
 export const doseToSchema = z.enum(DOSE_QUANTITIES, {
   error: `dose convention must be one of ${DOSE_QUANTITIES.map((q) => `"${q}"`).join(', ')}`,

@@ -1,6 +1,6 @@
 // CSV exports of a calculation: the depth curves of every method and the point-check tables
 // (per beam and total). Numbers are written at full precision so the files parse back exactly;
-// a missing value is an empty cell.
+// a missing value is an empty cell; text a spreadsheet would run as a formula is neutralised.
 import Papa from 'papaparse';
 import type { CalcReport } from '../contract/reports';
 import type { PlanCheck } from '../engine/check/planCheck';
@@ -10,8 +10,18 @@ type Cell = string | number | null;
 const cell = (v: number | null | undefined): Cell =>
   v === null || v === undefined || !Number.isFinite(v) ? null : v;
 
+/**
+ * Text that a spreadsheet would read as a formula (leading =, +, -, @, tab or carriage return;
+ * OWASP "CSV injection"): such a cell is written with a leading apostrophe, so it stays text.
+ * Numbers are written as numbers (a negative difference stays a number).
+ */
+export const FORMULA_LIKE = /^[=+\-@\t\r]/;
+
 export function toCsv(fields: string[], rows: Cell[][]): string {
-  return Papa.unparse({ fields, data: rows.map((r) => r.map((c) => (c === null ? '' : c))) });
+  return Papa.unparse(
+    { fields, data: rows.map((r) => r.map((c) => (c === null ? '' : c))) },
+    { escapeFormulae: FORMULA_LIKE },
+  );
 }
 
 /**
@@ -29,7 +39,9 @@ export function curvesCsv(report: CalcReport): string {
     const row: Cell[] = [d, cell(report.radiologicalDepthCm[i])];
     for (const m of report.methods) {
       row.push(cell(m.curve.dosePerMuCGy[i]), cell(m.curve.cf[i]));
-      if (m.curve.sigmaDosePerMuCGy) row.push(cell(m.curve.sigmaDosePerMuCGy[i]));
+      // No σ beside a withheld value (a bin without an uncertainty has no value either).
+      if (m.curve.sigmaDosePerMuCGy)
+        row.push(cell(m.curve.dosePerMuCGy[i] === null ? null : m.curve.sigmaDosePerMuCGy[i]));
     }
     row.push(report.doseTo);
     return row;

@@ -5,6 +5,8 @@ import { formatPath, validateCase, type CaseProblem } from './caseFile';
 import { CASE_FORMAT, type LaminaCase } from './caseSchema';
 import type { CaseCheckSettings } from './checkSettingsSchema';
 import type { DoseQuantity } from '../engine/dose/doseQuantity';
+import type { MethodId } from '../engine/methodRegistry';
+import { issueText } from './issueText';
 import {
   PLAN_FORMAT,
   PLAN_VERSION,
@@ -28,7 +30,7 @@ export interface LaminaPlan {
   beams: PlanBeam[];
   prescription?: PlanPrescription | undefined;
   tolerances?: PlanTolerances | undefined;
-  checkMethodId?: string | undefined;
+  checkMethodId?: MethodId | undefined;
   doseTo?: DoseQuantity | undefined;
 }
 
@@ -70,8 +72,19 @@ export function caseWithCheckSettings(c: LaminaCase, s: CaseCheckSettings): Lami
   delete rest.check;
   return Object.keys(s).length > 0 ? { ...rest, check: s } : rest;
 }
+
+/** The rule for a prescription point: some beam must have it (null when one does). */
+export function prescriptionPointProblem(
+  beams: readonly { case: { points: readonly { id: string }[] } }[],
+  pointId: string,
+): string | null {
+  return beams.some((b) => b.case.points.some((p) => p.id === pointId))
+    ? null
+    : `no beam has a point "${pointId}"`;
+}
+
 function validatePlanDocument(raw: unknown): PlanParseResult {
-  const shell = planShellSchema.safeParse(raw);
+  const shell = planShellSchema.safeParse(raw, { error: issueText });
   if (!shell.success)
     return {
       ok: false,
@@ -90,12 +103,9 @@ function validatePlanDocument(raw: unknown): PlanParseResult {
     } else beams.push({ ...b, case: c.value });
   });
   const rx = shell.data.prescription;
-  if (
-    rx &&
-    problems.length === 0 &&
-    !beams.some((b) => b.case.points.some((p) => p.id === rx.pointId))
-  )
-    problems.push({ path: 'prescription.pointId', message: `no beam has a point "${rx.pointId}"` });
+  const rxProblem =
+    rx && problems.length === 0 ? prescriptionPointProblem(beams, rx.pointId) : null;
+  if (rxProblem) problems.push({ path: 'prescription.pointId', message: rxProblem });
   if (problems.length > 0) return { ok: false, problems };
   return { ok: true, value: { ...shell.data, version: PLAN_VERSION, beams } };
 }

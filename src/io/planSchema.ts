@@ -44,8 +44,8 @@ export const planShellSchema = z
     notes: z.string().max(5000, 'notes must be at most 5000 characters').optional(),
     beams: z
       .array(planBeamShellSchema, { error: 'beams must be a list' })
-      .min(1, 'beams: at least one beam is needed')
-      .max(MAX_BEAMS, `beams: at most ${MAX_BEAMS} beams`),
+      .min(1, 'at least one beam is needed')
+      .max(MAX_BEAMS, `at most ${MAX_BEAMS} beams`),
     prescription: prescriptionSchema.optional(),
     tolerances: tolerancesSchema.optional(),
     /** Method whose verdict decides the check (the default for the path when absent). */

@@ -1,10 +1,10 @@
 // Autosave of the case being edited to the browser's local storage, and its restore on reload.
 // Storage can be missing (private mode, blocked) or full: the caller gets a message to show,
 // and the case in memory is untouched. Entries are versioned (./autosaveEntry); an entry that
-// cannot be read is copied to a backup key before anything could overwrite it, and is never
-// overwritten when that copy fails.
+// cannot be read, or only in part (a lenient reading left something out), is copied to a backup
+// key before anything could overwrite it, and is never overwritten when that copy fails.
 import type { LaminaCase } from '../io/caseSchema';
-import { autosaveEntryText, readAutosaveEntry, textTag } from './autosaveEntry';
+import { autosaveEntryText, readAutosaveEntry, textTag, type AutosaveRead } from './autosaveEntry';
 
 export { lenientCase } from './autosaveEntry';
 
@@ -12,6 +12,11 @@ export const AUTOSAVE_KEY = 'lamina.autosave.case';
 export const AUTOSAVE_BACKUP_PREFIX = 'lamina.autosave.backup.';
 
 export type StorageLike = Pick<Storage, 'getItem' | 'setItem'>;
+
+/** An entry that cannot be read in full: unreadable, or read leniently with parts left out. */
+function needsBackup(r: AutosaveRead): boolean {
+  return r.status === 'unreadable' || (r.status === 'ok' && r.dropped !== undefined);
+}
 
 export function browserStorage(): StorageLike | null {
   try {
@@ -54,12 +59,12 @@ export function saveCaseToStorage(
   if (!storage) return { ok: false, message: UNAVAILABLE };
   try {
     const previous = storage.getItem(AUTOSAVE_KEY);
-    if (previous !== null && readAutosaveEntry(previous).status === 'unreadable') {
+    if (previous !== null && needsBackup(readAutosaveEntry(previous))) {
       const b = backupEntry(storage, previous);
       if (!b.ok)
         return {
           ok: false,
-          message: `Autosave paused: the earlier autosaved entry cannot be read and could not be copied to a backup (${b.reason}), so it is left as it is under "${AUTOSAVE_KEY}". Your case is still here; save it to a file.`,
+          message: `Autosave paused: the earlier autosaved entry cannot be read in full and could not be copied to a backup (${b.reason}), so it is left as it is under "${AUTOSAVE_KEY}". Your case is still here; save it to a file.`,
         };
     }
     storage.setItem(AUTOSAVE_KEY, autosaveEntryText(c, now));
@@ -98,7 +103,18 @@ export function restoreAutosave(storage: StorageLike | null): RestoreResult {
   }
   const r = readAutosaveEntry(text);
   if (r.status === 'empty') return { value: null, message: null };
-  if (r.status === 'ok') return { value: r.value, message: null };
+  if (r.status === 'ok' && !r.dropped) return { value: r.value, message: null };
+  if (r.status === 'ok') {
+    // Restored leniently with parts left out: say which, and keep the entry as it was.
+    const b = backupEntry(storage, text as string);
+    const without = `The autosaved case was restored without ${r.dropped!.join('; ')}`;
+    return {
+      value: r.value,
+      message: b.ok
+        ? `${without}. The entry as it was is kept unchanged in this browser's storage under "${b.key}".`
+        : `${without}, and the entry as it was could not be backed up (${b.reason}); it is left under "${AUTOSAVE_KEY}" and autosave will not overwrite it. Save the case to a file.`,
+    };
+  }
   const b = backupEntry(storage, text as string);
   return {
     value: null,

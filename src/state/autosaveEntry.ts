@@ -10,6 +10,7 @@ import { caseCheckSchema } from '../io/checkSettingsSchema';
 import { migrateCase } from '../io/caseMigrations';
 import {
   beamSchema,
+  caseNotesSchema,
   CASE_FORMAT,
   CASE_VERSION,
   layerSchema,
@@ -31,7 +32,14 @@ export interface AutosaveEnvelope {
 
 export type AutosaveRead =
   | { status: 'empty' }
-  | { status: 'ok'; value: LaminaCase; fromVersion: number; savedAt: string | null }
+  | {
+      status: 'ok';
+      value: LaminaCase;
+      fromVersion: number;
+      savedAt: string | null;
+      /** What a lenient reading left out, one phrase each (absent when nothing was). */
+      dropped?: string[];
+    }
   | { status: 'unreadable'; reason: string };
 
 /** Lifts an entry of storage version v to v + 1 (keyed by v). */
@@ -86,26 +94,40 @@ export function readAutosaveEntry(text: string | null): AutosaveRead {
   const envelope = entry as Partial<AutosaveEnvelope>;
   const c = validateCase(envelope.case);
   // A case saved mid-edit (a point below a thinned phantom…) still restores, leniently.
-  const value = c.ok ? c.value : lenientCase(envelope.case);
-  if (!c.ok && !value)
+  const lenient = c.ok ? null : lenientCase(envelope.case);
+  if (!c.ok && !lenient)
     return {
       status: 'unreadable',
       reason: `the case no longer reads: ${describeProblems(c.problems.slice(0, 3)).replace(/\n/g, '; ')}`,
     };
+  const value = c.ok ? c.value : (lenient as LenientCase).value;
+  const dropped = lenient?.dropped ?? [];
   return {
     status: 'ok',
-    value: value as LaminaCase,
+    value,
     fromVersion,
     savedAt: typeof envelope.savedAt === 'string' ? envelope.savedAt : null,
+    ...(dropped.length > 0 ? { dropped } : {}),
   };
 }
+
+/** A case read leniently, with what was left out of it. */
+export interface LenientCase {
+  value: LaminaCase;
+  /** One phrase per part left out, e.g. "the notes (notes must be at most 5000 characters)". */
+  dropped: string[];
+}
+
+const firstProblem = (r: { error: { issues: readonly { message: string }[] } }) =>
+  r.error.issues[0]?.message ?? 'invalid';
 
 /**
  * A case the editor can hold even though it does not validate as a whole (a point below the
  * phantom after a layer was thinned, a duplicate point name): each beam, layer and point must be
- * valid on its own. The calculation then lists the remaining problems.
+ * valid on its own. The calculation then lists the remaining problems. Parts that cannot be kept
+ * (a broken water table, over-long notes, unknown fields) are left out and listed in `dropped`.
  */
-export function lenientCase(raw: unknown): LaminaCase | null {
+export function lenientCase(raw: unknown): LenientCase | null {
   // Older case versions are lifted first (a refused migration leaves the entry unreadable).
   const migrated = migrateCase(raw);
   if (!migrated.ok) return null;
@@ -116,19 +138,52 @@ export function lenientCase(raw: unknown): LaminaCase | null {
   const points = Array.isArray(d.points) ? d.points.map((p) => pointSchema.safeParse(p)) : [];
   if (!beam.success || layers.length === 0) return null;
   if (!layers.every((l) => l.success) || !points.every((p) => p.success)) return null;
+  const dropped: string[] = [];
+  let name = '';
+  if (typeof d.name === 'string') {
+    name = d.name.slice(0, 200);
+    if (name !== d.name) dropped.push(`the end of the name (beyond 200 characters)`);
+  } else if (d.name !== undefined) dropped.push('the name (not text)');
   const c: LaminaCase = {
     format: CASE_FORMAT,
     version: CASE_VERSION,
-    name: typeof d.name === 'string' ? d.name.slice(0, 200) : '',
+    name,
     beam: beam.data,
     layers: layers.map((l) => l.data),
     points: points.map((p) => p.data),
   };
-  const w = waterDataSchema.safeParse(d.waterData);
-  if (w.success) c.waterData = w.data;
-  const check = caseCheckSchema.safeParse(d.check);
-  if (check.success) c.check = check.data;
-  return c;
+  if (d.notes !== undefined) {
+    const notes = caseNotesSchema.safeParse(d.notes);
+    if (notes.success) c.notes = notes.data;
+    else dropped.push(`the notes (${firstProblem(notes)})`);
+  }
+  if (d.waterData !== undefined) {
+    const w = waterDataSchema.safeParse(d.waterData);
+    if (w.success) c.waterData = w.data;
+    else dropped.push(`the measured water table (${firstProblem(w)})`);
+  }
+  if (d.check !== undefined) {
+    const check = caseCheckSchema.safeParse(d.check);
+    if (check.success) c.check = check.data;
+    else dropped.push(`the check settings (${firstProblem(check)})`);
+  }
+  const known = new Set([
+    'format',
+    'version',
+    'name',
+    'notes',
+    'beam',
+    'layers',
+    'points',
+    'waterData',
+    'check',
+  ]);
+  const unknown = Object.keys(d).filter((k) => !known.has(k));
+  if (unknown.length > 0)
+    dropped.push(
+      `unknown field${unknown.length > 1 ? 's' : ''} ${unknown.map((k) => `"${k}"`).join(', ')}`,
+    );
+  return { value: c, dropped };
 }
 
 /** A short, stable tag of a text (FNV-1a, 32 bits, hex) so one entry gets one backup key. */

@@ -3,6 +3,7 @@
 import { create } from 'zustand';
 import { buildMeasuredWaterData, type MeasuredTableSummary } from '../engine/beam/measuredTable';
 import type { CaseWaterData } from '../io/caseSchema';
+import { RANGES, rangeProblem, type NumericRange } from '../engine/inputRanges';
 
 export interface WaterDraft {
   kind: 'tmr' | 'pdd';
@@ -37,7 +38,13 @@ export type WaterCheck =
   | { ok: true; waterData: CaseWaterData; summary: MeasuredTableSummary }
   | { ok: false; problems: string[] };
 
-function optionalNumber(text: string, name: string, problems: string[]): number | undefined {
+/** A typed optional number in its shared range (the same range as the case file and the CLI). */
+function optionalNumber(
+  text: string,
+  name: string,
+  range: NumericRange,
+  problems: string[],
+): number | undefined {
   const t = text.trim();
   if (t === '') return undefined;
   const v = Number(t.replace(',', '.'));
@@ -45,6 +52,8 @@ function optionalNumber(text: string, name: string, problems: string[]): number 
     problems.push(`${name}: "${text}" is not a number`);
     return undefined;
   }
+  const problem = rangeProblem(v, range);
+  if (problem) problems.push(`${name}: ${problem}`);
   return v;
 }
 
@@ -54,11 +63,14 @@ export function checkWaterDraft(d: WaterDraft): WaterCheck {
   if (d.csv.trim() === '')
     return { ok: false, problems: ['Depth table: load a file or paste CSV text'] };
   const ssdCm =
-    d.kind === 'pdd' ? optionalNumber(d.ssdText, 'Table SSD (cm)', problems) : undefined;
-  const dMaxCm = optionalNumber(d.dMaxText, 'd_max (cm)', problems);
+    d.kind === 'pdd'
+      ? optionalNumber(d.ssdText, 'Table SSD (cm)', RANGES.distanceCm, problems)
+      : undefined;
+  const dMaxCm = optionalNumber(d.dMaxText, 'd_max (cm)', RANGES.dMaxCm, problems);
   const referenceDosePerMuCGy = optionalNumber(
     d.referenceText,
     'Reference dose rate (cGy/MU)',
+    RANGES.referenceDosePerMuCGy,
     problems,
   );
   if (problems.length) return { ok: false, problems };

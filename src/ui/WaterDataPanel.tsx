@@ -13,6 +13,7 @@ import {
 import { seriesStyles } from '../plots/palette';
 import { CurveChart } from './CurveChart';
 import { loadDemoTables } from './demoTables';
+import { readTextFile } from './readTextFile';
 
 /** Largest table file read: a case carries at most 500 000 characters of table text. */
 export const MAX_TABLE_FILE_BYTES = 2 * 1024 * 1024;
@@ -27,10 +28,12 @@ function readTableFile(f: File, onText: (name: string, text: string) => void): v
     );
     return;
   }
-  f.text().then(
-    (t) => onText(f.name, t),
-    (e: unknown) => refuse(`could not be read (${e instanceof Error ? e.message : String(e)})`),
-  );
+  void readTextFile(f).then((r) => {
+    if (!r.ok) return refuse(r.problem);
+    onText(f.name, r.text);
+    // The encoding is named when it is not plain UTF-8 (as the command line does).
+    if (r.note) setNotice({ kind: 'info', title: `Read ${f.name}`, lines: [r.note] });
+  });
 }
 
 function FileInput({

@@ -3,6 +3,7 @@
 import { parseCaseText } from '../io/caseFile';
 import { replaceCase, setNotice } from '../state/store';
 import { applyCheckSettings } from './check/pageCheckSettings';
+import { readTextFile } from './readTextFile';
 
 export function fileNameFor(name: string): string {
   const slug = name
@@ -29,18 +30,16 @@ export async function openCaseFile(file: File): Promise<void> {
     );
     return;
   }
-  let text: string;
-  try {
-    text = await file.text();
-  } catch (e) {
-    refuse(`(file): could not be read (${e instanceof Error ? e.message : String(e)})`);
+  const read = await readTextFile(file);
+  if (!read.ok) {
+    refuse(`(file): ${read.problem}`);
     return;
   }
-  const r = parseCaseText(text);
+  const r = parseCaseText(read.text);
   if (r.ok) {
     replaceCase(r.value);
     applyCheckSettings(r.value.check);
-    setNotice({ kind: 'info', title: `Opened ${file.name}`, lines: [] });
+    setNotice({ kind: 'info', title: `Opened ${file.name}`, lines: read.note ? [read.note] : [] });
   } else
     setNotice({
       kind: 'error',

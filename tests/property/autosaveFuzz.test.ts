@@ -1,7 +1,8 @@
 // Browser-storage restore under generated entries: whatever text sits under the autosave key
 // (current or version-1 entries, damaged, foreign, from a newer Lamina, random), restoring never
 // throws, gives a case that validates (or the editor's lenient reading of one) or nothing, and
-// an entry it cannot read is kept byte for byte under the backup key its message names.
+// an entry it cannot read, or reads only in part, is kept byte for byte under the backup key its
+// message names (with what was left out).
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { serializeCase, validateCase } from '../../src/io/caseFile';
@@ -41,7 +42,7 @@ const entryText = fc.oneof(
 
 describe('autosave restore under generated entries', () => {
   it('restores a valid case, or keeps the entry under a named backup key (10 000 entries)', () => {
-    const seen = { restored: 0, backedUp: 0 };
+    const seen = { restored: 0, backedUp: 0, lenientWithDrops: 0 };
     fc.assert(
       fc.property(entryText, (text) => {
         const s = memoryStorage();
@@ -50,7 +51,21 @@ describe('autosave restore under generated entries', () => {
         const backups = [...s.map].filter(([k]) => k.startsWith(AUTOSAVE_BACKUP_PREFIX));
         if (r.value) {
           seen.restored++;
-          if (r.message !== null || backups.length > 0) throw new Error('restored with a backup');
+          const read = readAutosaveEntry(text);
+          if (read.status !== 'ok') throw new Error('restored an unreadable entry');
+          if (read.dropped) {
+            // Restored leniently with parts left out: the message lists each, and the entry is
+            // kept byte for byte under the backup key it names.
+            seen.lenientWithDrops++;
+            if (backups.length !== 1)
+              throw new Error(`expected one backup, found ${backups.length}`);
+            const [key, kept] = backups[0] as [string, string];
+            if (kept !== text) throw new Error('backup differs from the entry');
+            if (!r.message?.includes(`"${key}"`)) throw new Error(`message does not name ${key}`);
+            for (const d of read.dropped)
+              if (!r.message.includes(d)) throw new Error(`message does not say it left out ${d}`);
+          } else if (r.message !== null || backups.length > 0)
+            throw new Error('restored in full with a message or a backup');
           // Strictly valid, or lenient (layers, beam and points each valid on their own).
           const strict = validateCase(r.value);
           if (!strict.ok && r.value.layers.length === 0)
@@ -76,5 +91,6 @@ describe('autosave restore under generated entries', () => {
     );
     expect(seen.restored).toBeGreaterThan(1000);
     expect(seen.backedUp).toBeGreaterThan(3000);
+    expect(seen.lenientWithDrops).toBeGreaterThan(10);
   });
 });

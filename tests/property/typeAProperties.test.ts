@@ -2,7 +2,12 @@
 // analytic 6 MV-like fixture water data (invented) unless stated.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { bathoMethod } from '../../src/engine/corrections/batho';
+import {
+  BATHO_WITHHELD_MIN_DELTA_RHO,
+  bathoMethod,
+  bathoPowerLawProduct,
+} from '../../src/engine/corrections/batho';
+import type { WaterData } from '../../src/engine/beam/waterData';
 import { bathoModifiedMethod } from '../../src/engine/corrections/bathoModified';
 import type { TypeAMethod } from '../../src/engine/corrections/correctionTypes';
 import { etarMethod } from '../../src/engine/corrections/etar';
@@ -26,6 +31,18 @@ const layers = fc.array(
   ),
   { minLength: 1, maxLength: 5 },
 );
+
+/** Batho's CF, or null when it is withheld, which must then carry its reason. */
+function bathoOrWithheld(
+  p: ReturnType<typeof slabs>,
+  d: number,
+  s: number,
+  water: WaterData,
+): number | null {
+  const r = bathoMethod.correct(p, d, s, water, {});
+  if (r.cf === null) expect(r.flags[0]).toMatch(/^undefined: unshifted Batho /);
+  return r.cf;
+}
 
 describe('type-A invariants', () => {
   it('every method gives CF = 1 in homogeneous water (to round-off of the summed radiological depth)', () => {
@@ -100,10 +117,12 @@ describe('type-A invariants', () => {
           const p = slabs([...spec, [1, 10]]);
           const d = p.totalThicknessCm - 10 + beyond;
           const r = rtmrMethod.correct(p, d, s, exp, {}).cf as number;
-          // identity up to round-off in products of up to 6 powers
-          expect(
-            Math.abs((bathoMethod.correct(p, d, s, exp, {}).cf as number) / r - 1),
-          ).toBeLessThan(1e-12);
+          // identity up to round-off in products of up to 6 powers, for the power law itself and
+          // for the method wherever it gives a value (it withholds within d_max of an interface)
+          const formula = bathoPowerLawProduct(p, d, 0, (x) => exp.tmr(x, s)).product;
+          expect(Math.abs(formula / r - 1)).toBeLessThan(1e-12);
+          const batho = bathoOrWithheld(p, d, s, exp);
+          if (batho !== null) expect(Math.abs(batho / r - 1)).toBeLessThan(1e-12);
           expect(
             Math.abs((bathoModifiedMethod.correct(p, d, s, exp, {}).cf as number) / r - 1),
           ).toBeLessThan(1e-12);
@@ -144,18 +163,49 @@ describe('type-A invariants', () => {
     );
   });
 
-  it('every method returns a finite positive CF for any valid phantom, point and field', () => {
+  it('every method returns a finite positive CF for any valid phantom, point and field, except unshifted Batho where it is undefined', () => {
     fc.assert(
       fc.property(layers, fc.double({ min: 0, max: 1, noNaN: true }), side, (spec, u, s) => {
         const p = slabs(spec);
         const d = u * p.totalThicknessCm;
         for (const m of TYPE_A_METHODS) {
-          const cf = cfOf(m, p, d, s);
+          const cf = m.id === 'batho' ? bathoOrWithheld(p, d, s, wd) : cfOf(m, p, d, s);
+          if (cf === null && m.id === 'batho') continue; // withheld by the stated rule, with its reason
           expect(cf !== null && Number.isFinite(cf) && cf > 0, `${m.id}: ${cf}`).toBe(true);
         }
       }),
       RUNS,
     );
+  });
+
+  it('batho(...) is withheld exactly within d_max below an interface with |Δρ_e| ≥ 0.1, with the reason', () => {
+    let withheld = 0;
+    fc.assert(
+      fc.property(layers, fc.double({ min: 0, max: 1, noNaN: true }), side, (spec, u, s) => {
+        const p = slabs(spec);
+        const d = u * p.totalThicknessCm;
+        const r = bathoMethod.correct(p, d, s, wd, {});
+        // the rule, restated: some layer top at or above the point, less than d_max above it,
+        // whose exponent ρ_m − ρ_{m−1} (ρ_{−1} = 1, water) is at least 0.1 in size
+        const n = p.layers.findIndex((l) => d <= l.bottomCm + 1e-12);
+        const holds = p.layers
+          .slice(0, (n < 0 ? p.layers.length - 1 : n) + 1)
+          .some(
+            (l, m) =>
+              d - l.topCm < wd.dMaxCm - 1e-9 &&
+              Math.abs(
+                l.relativeElectronDensity - (p.layers[m - 1]?.relativeElectronDensity ?? 1),
+              ) >= BATHO_WITHHELD_MIN_DELTA_RHO,
+          );
+        expect(r.cf === null).toBe(holds);
+        if (holds) {
+          withheld++;
+          expect(r.flags[0]).toMatch(/^undefined: unshifted Batho .* within d_max/);
+        } else expect(Number.isFinite(r.cf) && (r.cf as number) > 0).toBe(true);
+      }),
+      { numRuns: 500 },
+    );
+    expect(withheld).toBeGreaterThan(20);
   });
 
   it('batho(...) with three media equals Khan’s T(d1)^(ρ3 − ρ2)/T(d2)^(1 − ρ2)', () => {
@@ -177,9 +227,12 @@ describe('type-A invariants', () => {
           ]);
           const d = top + t2 + into;
           const khan = wd.tmr(into, s) ** (rho3 - rho2) / wd.tmr(into + t2, s) ** (1 - rho2);
-          const cf = cfOf(bathoMethod, p, d, s) as number;
-          // same powers in a different order; relative round-off only
-          expect(Math.abs(cf / khan - 1)).toBeLessThan(1e-12);
+          // same powers in a different order; relative round-off only: the power law itself, and
+          // the method wherever it gives a value
+          const formula = bathoPowerLawProduct(p, d, 0, (x) => wd.tmr(x, s)).product;
+          expect(Math.abs(formula / khan - 1)).toBeLessThan(1e-12);
+          const cf = bathoOrWithheld(p, d, s, wd);
+          if (cf !== null) expect(Math.abs(cf / khan - 1)).toBeLessThan(1e-12);
         },
       ),
       RUNS,

@@ -1,6 +1,7 @@
 // A measured water-data table imported by the user, turned into the engine's `WaterData`:
 // a TMR or PDD matrix (PDD converted to TMR once, on import), optional scatter factors, d_max and
 // the reference dose rate. Its `source` names the file and the first 12 hex digits of its SHA-256.
+import { RANGES, rangeProblem, type NumericRange } from '../inputRanges';
 import { bracketIndex, lerp } from '../units';
 import { sha256Hex } from '../util/sha256';
 import { tmrFromPdd } from './depthDoseConversions';
@@ -132,6 +133,31 @@ function prefixed(fileName: string, problems: string[]): string[] {
   return problems.map((p) => `${fileName}: ${p}`);
 }
 
+/**
+ * The table's numbers against the shared ranges (src/engine/inputRanges): the SSD a PDD table was
+ * measured at, d_max and the reference dose rate, each message naming the number and its value.
+ */
+export function measuredTableNumberProblems(
+  input: Pick<
+    MeasuredTableInput,
+    'kind' | 'fileName' | 'ssdCm' | 'dMaxCm' | 'referenceDosePerMuCGy'
+  >,
+): string[] {
+  const out: string[] = [];
+  const check = (what: string, v: number | undefined, range: NumericRange) => {
+    const p = v === undefined ? null : rangeProblem(v, range);
+    const shown =
+      v !== undefined && Number.isFinite(v) ? ` ${v}${range.unit ? ` ${range.unit}` : ''}` : '';
+    if (p) out.push(`${input.fileName}: ${what}${shown}: ${p}`);
+  };
+  if (input.kind === 'pdd' && input.ssdCm === undefined)
+    out.push(`${input.fileName}: a PDD table needs its SSD (cm)`);
+  if (input.kind === 'pdd') check('table SSD', input.ssdCm, RANGES.distanceCm);
+  check('d_max', input.dMaxCm, RANGES.dMaxCm);
+  check('reference dose rate', input.referenceDosePerMuCGy, RANGES.referenceDosePerMuCGy);
+  return out;
+}
+
 /** Build `WaterData` from a measured table (and optional scatter factors), or list the problems. */
 export function buildMeasuredWaterData(input: MeasuredTableInput): MeasuredTableResult {
   const parsed = parseDepthFieldCsv(input.csv, input.kind);
@@ -142,13 +168,8 @@ export function buildMeasuredWaterData(input: MeasuredTableInput): MeasuredTable
     if (s.ok) scatter = s.value;
     else problems.push(...prefixed(input.scatterFileName ?? 'scatter factors', s.problems));
   }
-  if (input.kind === 'pdd' && !(input.ssdCm !== undefined && input.ssdCm > 0))
-    problems.push(`${input.fileName}: a PDD table needs its SSD (cm)`);
-  if (input.dMaxCm !== undefined && !(input.dMaxCm > 0 && input.dMaxCm < 10))
-    problems.push(`${input.fileName}: d_max ${input.dMaxCm} cm must lie in (0, 10) cm`);
+  problems.push(...measuredTableNumberProblems(input));
   const ref = input.referenceDosePerMuCGy;
-  if (ref !== undefined && !(ref > 0 && ref <= 10))
-    problems.push(`reference dose rate ${ref} cGy/MU must lie in (0, 10]`);
   if (!parsed.ok || problems.length > 0) return { ok: false, problems };
 
   const m = parsed.value;

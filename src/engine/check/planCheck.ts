@@ -23,6 +23,7 @@ import {
   type Tolerances,
   type Verdict,
 } from './tolerance';
+import { weightFractions } from './weightFractions';
 
 export interface CheckPointInput {
   id: string;
@@ -340,10 +341,8 @@ function totalsOf(beams: readonly BeamCheck[], methods: readonly { id: string }[
 /** The full check of one or more beams against the planning system's values. */
 export function checkPlan(beams: readonly CheckBeamInput[], options: CheckOptions): PlanCheck {
   const methods = unionMethods(beams);
-  const weightSum = beams.reduce((s, b) => s + b.weight, 0);
-  const beamChecks = beams.map((b) =>
-    checkBeam(b, weightSum > 0 ? b.weight / weightSum : 0, methods, options),
-  );
+  const fractions = weightFractions(beams.map((b) => b.weight));
+  const beamChecks = beams.map((b, i) => checkBeam(b, fractions[i] ?? 0, methods, options));
   const totals = totalsOf(beamChecks, methods, options.tolerances);
   const verdictByMethod: Record<string, Verdict> = {};
   methods.forEach(({ id }, k) => {

@@ -47,6 +47,39 @@ function depthFunctionOf(
   return (xCm) => wd.tmr(xCm, sideAtDepthCm, recorder) * psf;
 }
 
+/**
+ * Smallest exponent |ρ_m − ρ_{m−1}| for which the unshifted power law is withheld within d_max
+ * below the top of layer m. There the factor T(X_m)^Δρ reads the build-up part of the table and
+ * swings the result by tens of per cent (a 0.1 cm air gap gave CF 6.2, water just below dense bone
+ * CF 22): undefined, as the method is (Thomas 1991). Smaller exponents (soft tissue, muscle, fat
+ * against water) change the factor by a few per cent and keep the value with its flag.
+ */
+export const BATHO_WITHHELD_MIN_DELTA_RHO = 0.1;
+
+/**
+ * The interface that leaves the unshifted power law undefined at a depth: the nearest layer top
+ * less than d_max above the point whose exponent |Δρ_e| ≥ BATHO_WITHHELD_MIN_DELTA_RHO (the
+ * surface counts, against μ₀ ≡ water); null when there is none.
+ */
+export function unshiftedBathoUndefinedAt(
+  phantom: SlabPhantom,
+  pointDepthCm: number,
+  dMaxCm: number,
+): { interfaceCm: number; deltaRho: number } | null {
+  const n = layerIndexAtDepth(phantom, pointDepthCm);
+  let previousRho = 1;
+  let found: { interfaceCm: number; deltaRho: number } | null = null;
+  for (let m = 0; m <= n; m++) {
+    const layer = phantom.layers[m] as SlabLayer;
+    const deltaRho = layer.relativeElectronDensity - previousRho;
+    previousRho = layer.relativeElectronDensity;
+    if (Math.abs(deltaRho) < BATHO_WITHHELD_MIN_DELTA_RHO) continue;
+    // 1e-9 cm: a point d_max below an interface, as summed layer tops round, is not within it.
+    if (pointDepthCm - layer.topCm < dMaxCm - 1e-9) found = { interfaceCm: layer.topCm, deltaRho };
+  }
+  return found;
+}
+
 export const bathoMethod: TypeAMethod = {
   id: 'batho',
   label: 'Batho power law (generalized)',
@@ -54,6 +87,14 @@ export const bathoMethod: TypeAMethod = {
     `${(o.bathoTable ?? 'tmr').toUpperCase()}, no shift, μ₀ ≡ water, exponents by ρ_e`,
   usesPsf: (o) => o.bathoTable === 'tar',
   correct(phantom, pointDepthCm, sideAtDepthCm, wd, options): CorrectionResult {
+    const undefinedAt = unshiftedBathoUndefinedAt(phantom, pointDepthCm, wd.dMaxCm);
+    if (undefinedAt)
+      return {
+        cf: null,
+        flags: [
+          `undefined: unshifted Batho ${(pointDepthCm - undefinedAt.interfaceCm).toFixed(2)} cm below the interface at ${undefinedAt.interfaceCm.toFixed(2)} cm (Δρ_e ${undefinedAt.deltaRho.toFixed(2)}), within d_max ${wd.dMaxCm.toFixed(2)} cm: the power law would read the build-up region (use batho-modified)`,
+        ],
+      };
     const { recorder, flags } = collectingRecorder();
     const t = depthFunctionOf(wd, sideAtDepthCm, options.bathoTable ?? 'tmr', recorder);
     const { product, smallestDistanceCm } = bathoPowerLawProduct(phantom, pointDepthCm, 0, t);

@@ -2,6 +2,12 @@
 // grid and at each point, with the method's variant and the water data's source printed alongside.
 import { equivalentSquareCm, fieldAtDepthCm } from '../beam/geometry';
 import type { WaterData } from '../beam/waterData';
+import {
+  beyondWaterDataFlag,
+  depthReachEdgeCm,
+  watchDepthReach,
+  type DepthReachWatch,
+} from '../beam/waterDataReach';
 import { dosePerMuFactors } from '../check/dosePerMu';
 import type { MethodPoint, MethodResult } from '../methodResult';
 import type { SlabPhantom } from '../phantom/slabPhantom';
@@ -22,21 +28,36 @@ interface Evaluation {
   cf: number | null;
   dosePerMuCGy: number | null;
   flags: string[];
+  /** True when the value needed TMR beyond the deepest tabulated depth (then withheld). */
+  beyondTable: boolean;
 }
+
+/** Clamp flags of depth reads: replaced by the beyond-the-table reason when a value is withheld. */
+const isDepthClampFlag = (f: string) => f.startsWith('extrapolated: depth ');
 
 function evaluate(
   method: TypeAMethod,
   g: TypeAGeometry,
-  wd: WaterData,
+  watch: DepthReachWatch,
   depthCm: number,
   options: CorrectionOptions,
 ): Evaluation {
+  watch.reset();
+  const wd = watch.waterData;
   const side = equivalentSquareCm(
     fieldAtDepthCm(g.fieldXCm, g.ssdCm, depthCm),
     fieldAtDepthCm(g.fieldYCm, g.ssdCm, depthCm),
   );
   const r = method.correct(g.phantom, depthCm, side, wd, options);
-  if (r.cf === null) return { cf: null, dosePerMuCGy: null, flags: r.flags };
+  const withheld = (flags: string[], deepestCm: number): Evaluation => ({
+    cf: null,
+    dosePerMuCGy: null,
+    flags: [beyondWaterDataFlag(wd, deepestCm), ...flags.filter((f) => !isDepthClampFlag(f))],
+    beyondTable: true,
+  });
+  const beyondInCf = watch.deepestBeyondCm();
+  if (beyondInCf !== null) return withheld(r.flags, beyondInCf);
+  if (r.cf === null) return { cf: null, dosePerMuCGy: null, flags: r.flags, beyondTable: false };
   const { recorder, flags } = collectingRecorder();
   const factors = dosePerMuFactors({
     waterData: wd,
@@ -47,9 +68,11 @@ function evaluate(
     cf: r.cf,
     recorder,
   });
-  const dose = Number.isFinite(factors.dosePerMuCGy) ? factors.dosePerMuCGy : null;
   const all = [...r.flags, ...flags().filter((f) => !r.flags.includes(f))];
-  return { cf: r.cf, dosePerMuCGy: dose, flags: all };
+  const beyondInChain = watch.deepestBeyondCm();
+  if (beyondInChain !== null) return withheld(all, beyondInChain);
+  const dose = Number.isFinite(factors.dosePerMuCGy) ? factors.dosePerMuCGy : null;
+  return { cf: r.cf, dosePerMuCGy: dose, flags: all, beyondTable: false };
 }
 
 export function typeAMethodResult(
@@ -59,17 +82,32 @@ export function typeAMethodResult(
   options: CorrectionOptions = {},
 ): MethodResult {
   const opts: CorrectionOptions = { ...options, ssdCm: options.ssdCm ?? g.ssdCm };
+  const watch = watchDepthReach(wd);
   const cf: (number | null)[] = [];
   const dose: (number | null)[] = [];
-  for (const d of g.depthCm) {
-    const e = evaluate(method, g, wd, d, opts);
+  let firstBeyond = -1;
+  g.depthCm.forEach((d, i) => {
+    const e = evaluate(method, g, watch, d, opts);
     cf.push(e.cf);
     dose.push(e.dosePerMuCGy);
-  }
+    if (e.beyondTable && firstBeyond < 0) firstBeyond = i;
+  });
   const points: MethodPoint[] = g.points.map((p) => {
-    const e = evaluate(method, g, wd, p.depthCm, opts);
+    const e = evaluate(method, g, watch, p.depthCm, opts);
     return { id: p.id, depthCm: p.depthCm, cf: e.cf, dosePerMuCGy: e.dosePerMuCGy, flags: e.flags };
   });
+  // Reads grow with depth, so everything below the first withheld grid depth is withheld too;
+  // the edge itself lies between that depth and the one above it.
+  const beyondWaterDataFromCm =
+    firstBeyond < 0
+      ? undefined
+      : firstBeyond === 0
+        ? (g.depthCm[0] as number)
+        : depthReachEdgeCm(
+            g.depthCm[firstBeyond - 1] as number,
+            g.depthCm[firstBeyond] as number,
+            (d) => evaluate(method, g, watch, d, opts).beyondTable,
+          );
   return {
     id: method.id,
     label: method.label,
@@ -81,6 +119,7 @@ export function typeAMethodResult(
     waterData: wd.source,
     curve: { depthCm: [...g.depthCm], dosePerMuCGy: dose, cf },
     points,
+    ...(beyondWaterDataFromCm === undefined ? {} : { beyondWaterDataFromCm }),
   };
 }
 

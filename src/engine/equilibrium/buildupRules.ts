@@ -3,6 +3,7 @@
 // water table at X_m = d − z_top,m; for X_m < d_max that look-up falls in the build-up region and
 // the factor T(X_m)^(ρ_m − ρ_{m−1}) becomes unphysical (undefined closer to an interface than the
 // build-up distance; Thomas, Med Phys 18:719, 1991).
+import { BATHO_WITHHELD_MIN_DELTA_RHO } from '../corrections/batho';
 import { depthAtRadiologicalDepthCm } from './depthBands';
 import { qualityText, warningOverBand, type RuleContext } from './ruleContext';
 import { fmt, methodScope, ONE_D_METHOD_IDS, type Warning, type WarningSeverity } from './warning';
@@ -35,7 +36,7 @@ export function buildupWarnings(ctx: RuleContext): Warning[] {
 /** Smallest exponent |ρ_m − ρ_{m−1}| that raises UNSHIFTED-BATHO (smaller factors stay within ~1 %). */
 export const UNSHIFTED_BATHO_MIN_DELTA_RHO = 0.01;
 /** Severity thresholds on |Δρ_e| (the power in the Batho product). */
-export const UNSHIFTED_BATHO_CAUTION_DELTA_RHO = 0.1;
+export const UNSHIFTED_BATHO_CAUTION_DELTA_RHO = BATHO_WITHHELD_MIN_DELTA_RHO;
 export const UNSHIFTED_BATHO_SEVERE_DELTA_RHO = 0.5;
 
 export function unshiftedBathoWarnings(ctx: RuleContext): Warning[] {
@@ -65,7 +66,9 @@ export function unshiftedBathoWarnings(ctx: RuleContext): Warning[] {
           `exponent Δρ_e ${deltaRho.toFixed(3)} (severe ≥ ${UNSHIFTED_BATHO_SEVERE_DELTA_RHO}, caution ≥ ${UNSHIFTED_BATHO_CAUTION_DELTA_RHO}); ${qualityText(ctx)}`,
         values: { interfaceCm: layer.topCm, deltaRho, dMaxCm: dMax },
         explanation:
-          'The unshifted power law raises a build-up-region table value to the power Δρ here, which can swing the correction by tens of per cent (a numerical artefact, not physics).',
+          severity === 'note'
+            ? 'The unshifted power law raises a build-up-region table value to the power Δρ here, which can swing the correction by tens of per cent (a numerical artefact, not physics).'
+            : `The unshifted power law would raise a build-up-region table value to the power Δρ here, which swings the correction by tens of per cent (a numerical artefact, not physics), so Batho gives no value here (|Δρ_e| ≥ ${BATHO_WITHHELD_MIN_DELTA_RHO}).`,
         advice:
           'Use the modified (build-up-shifted) Batho, or the superposition or Monte Carlo result, for points this close to the interface.',
       },

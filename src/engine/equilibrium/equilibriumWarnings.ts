@@ -7,7 +7,12 @@ import type { SlabPhantom } from '../phantom/slabPhantom';
 import { typicalBeamQuality } from './beamQuality';
 import { buildupWarnings, unshiftedBathoWarnings } from './buildupRules';
 import { highDensityWarnings, lowDensityWarnings } from './densityRules';
-import { extrapolationWarnings, type ExtrapolationEvent } from './extrapolationRules';
+import {
+  beyondWaterDataWarnings,
+  extrapolationWarnings,
+  type BeyondWaterData,
+  type ExtrapolationEvent,
+} from './extrapolationRules';
 import { interfaceWarnings } from './interfaceRules';
 import { highEnergySmallFieldLungWarnings, ledWarnings } from './lateralRules';
 import type { RuleContext } from './ruleContext';
@@ -30,6 +35,8 @@ export interface EquilibriumInput {
   qualitySource?: string | undefined;
   points?: readonly { id: string; depthCm: number }[];
   extrapolations?: readonly ExtrapolationEvent[];
+  /** Type-A methods withheld from a depth on because their water data end above it. */
+  beyondWaterData?: readonly BeyondWaterData[];
 }
 
 export function ruleContextOf(input: EquilibriumInput): RuleContext {
@@ -69,6 +76,7 @@ export function equilibriumWarnings(input: EquilibriumInput): Warning[] {
     ...highDensityWarnings(ctx),
     ...highEnergySmallFieldLungWarnings(ctx),
     ...extrapolationWarnings(ctx, input.extrapolations ?? []),
+    ...beyondWaterDataWarnings(ctx, input.beyondWaterData ?? []),
   ];
   // Ids stay unique even when one rule raises two bands anchored on the same layer.
   const seen = new Map<string, number>();
@@ -116,6 +124,25 @@ export function extrapolationEventsOfMethods(
     }
   }
   return out;
+}
+
+/** The methods withheld from a depth on because their water data end above it. */
+export function beyondWaterDataOfMethods(
+  methods: readonly MethodResult[],
+  waterData: { depthRangeCm: readonly [number, number] } | undefined,
+): BeyondWaterData[] {
+  if (!waterData) return [];
+  return methods.flatMap((m) =>
+    m.beyondWaterDataFromCm === undefined
+      ? []
+      : [
+          {
+            methodId: m.id,
+            fromCm: m.beyondWaterDataFromCm,
+            tableDeepestCm: waterData.depthRangeCm[1],
+          },
+        ],
+  );
 }
 
 /** Warnings whose depth range holds a depth (cm). */

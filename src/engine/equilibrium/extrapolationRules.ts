@@ -71,3 +71,50 @@ export function extrapolationWarnings(
   }
   return out;
 }
+
+/** A type-A method that gives no value from a depth on, its water data ending above it. */
+export interface BeyondWaterData {
+  methodId: string;
+  /** Geometric depth from which the method is withheld (cm). */
+  fromCm: number;
+  /** Deepest tabulated depth of the water data (cm). */
+  tableDeepestCm: number;
+}
+
+/**
+ * EXTRAPOLATION (severe) from the depth where the water data end, for the methods withheld there:
+ * one band from the shallowest such depth to the bottom of the phantom.
+ */
+export function beyondWaterDataWarnings(
+  ctx: RuleContext,
+  beyond: readonly BeyondWaterData[],
+): Warning[] {
+  const first = beyond[0];
+  if (!first) return [];
+  const fromCm = Math.min(...beyond.map((b) => b.fromCm));
+  // Methods grouped by the depth they stop at ("rtmr, etar from 40.00 cm; batho-modified from 38.50 cm").
+  const byDepth = new Map<string, string[]>();
+  for (const b of [...beyond].sort((a, c) => c.fromCm - a.fromCm)) {
+    const key = fmt(b.fromCm);
+    byDepth.set(key, [...(byDepth.get(key) ?? []), b.methodId]);
+  }
+  const stops = [...byDepth].map(([d, ids]) => `${ids.join(', ')} from ${d} cm`).join('; ');
+  const w = warningOverBand(
+    ctx,
+    { fromCm, toCm: ctx.phantom.totalThicknessCm },
+    {
+      id: 'EXTRAPOLATION@water-data-depth',
+      code: 'EXTRAPOLATION',
+      severity: 'severe',
+      methods: methodScope(beyond.map((b) => b.methodId)),
+      numbers: `water data end at ${fmt(first.tableDeepestCm)} cm depth; no value: ${stops}`,
+      values: { tableDeepestCm: first.tableDeepestCm, fromCm },
+      explanation:
+        'The water data end above this depth. TMR keeps falling with depth (a few per cent per cm), so a value held at the table’s last depth would overstate the dose more with every centimetre; the table-based methods give no value here.',
+      advice:
+        'Extend the water table to the depth of the points, or read the kernel methods or the Monte Carlo here.',
+    },
+    true,
+  );
+  return w ? [w] : [];
+}

@@ -1,5 +1,6 @@
 // Merging batch tallies as they arrive and the batch estimate of the mean and its standard error
-// (n ≥ 10 batches): s_x̄ = √[Σ(x_b − x̄)² / (n(n − 1))] with x_b the per-history mean of batch b.
+// (n ≥ 10 batches): s_x̄ = √[Σ(x_b − x̄)² / (n(n − 1))] with x_b the per-history mean of batch b;
+// unknown (NaN) in a bin where fewer than two batches scored.
 // Sums run in batch order, so the result does not depend on which worker finished first.
 import type { BatchTally } from './runBatch';
 import type { EnergyTally } from './transport';
@@ -7,7 +8,7 @@ import type { EnergyTally } from './transport';
 export interface BinStatistics {
   /** Mean energy per history in each bin (MeV). */
   mean: Float64Array;
-  /** Standard error of that mean (MeV); NaN with fewer than two batches. */
+  /** Standard error of that mean (MeV); NaN where fewer than two batches scored. */
   sigma: Float64Array;
 }
 
@@ -103,12 +104,16 @@ export function statistics(batches: { values: Float64Array; histories: number }[
     for (let i = 0; i < nBins; i++) mean[i] = (mean[i] as number) + (b.values[i] as number);
   }
   for (let i = 0; i < nBins; i++) mean[i] = total > 0 ? (mean[i] as number) / total : 0;
-  const n = batches.length;
   for (let i = 0; i < nBins; i++) {
-    if (n < 2) {
+    // Fewer than two batches that scored in the bin: no spread to estimate σ from (a bin nobody
+    // scored in would otherwise read 0 ± 0, as if exactly known).
+    let scored = 0;
+    for (const b of batches) if ((b.values[i] as number) !== 0) scored++;
+    if (scored < 2) {
       sigma[i] = NaN;
       continue;
     }
+    const n = batches.length;
     // Batches of unequal size: weight by histories (x̄ is the history-weighted mean).
     let ss = 0;
     for (const b of batches) {

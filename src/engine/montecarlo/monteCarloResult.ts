@@ -46,6 +46,10 @@ export interface McResult {
   energyBalance: EnergyTally;
 }
 
+/** Flag of a Monte Carlo point withheld for want of an uncertainty. */
+export const MC_SIGMA_UNKNOWN =
+  'MC: no value, 1σ unknown (fewer than two batches scored dose here: run more histories)';
+
 export function finalizeMonteCarlo(
   plan: McPlan,
   accumulators: readonly BatchAccumulator[],
@@ -95,6 +99,10 @@ export function finalizeMonteCarlo(
   const histories = acc.histories;
   const spectrum = makeSpectrumSampler(caseScenario.energy);
   const finite = (v: number): number | null => (Number.isFinite(v) ? v : null);
+  // A value whose 1σ is unknown (fewer than two batches scored dose there) is withheld: with σ = 0
+  // it would read as exact ("0 ± 0" where nothing was scored).
+  const withSigma = (v: readonly number[], s: readonly number[]) =>
+    v.map((x, i) => (Number.isFinite(s[i]) ? finite(x) : null));
   const scored: MethodResult = {
     id: 'monte-carlo',
     label: 'Monte Carlo',
@@ -111,8 +119,8 @@ export function finalizeMonteCarlo(
     waterData: 'not used (Monte Carlo from spectra and cross sections)',
     curve: {
       depthCm: [...depthGridCm],
-      dosePerMuCGy: onGrid.value.map(finite),
-      cf: cfGrid.value.map(finite),
+      dosePerMuCGy: withSigma(onGrid.value, onGrid.sigma),
+      cf: withSigma(cfGrid.value, cfGrid.sigma),
       sigmaDosePerMuCGy: onGrid.sigma.map((s) => (Number.isFinite(s) ? s : 0)),
       sigmaCf: cfGrid.sigma.map((s) => (Number.isFinite(s) ? s : 0)),
     },
@@ -120,10 +128,9 @@ export function finalizeMonteCarlo(
       const dose = atPoints.value[i] as number;
       const sigma = atPoints.sigma[i] as number;
       const flags: string[] = [];
-      // A value whose 1σ is unknown (fewer than two batches, or no dose scored) is not shown as a
-      // number: with σ = 0 it would read as exact in the point check.
+      // As on the curve: no value without a known 1σ (the point check would read σ = 0 as exact).
       const known = Number.isFinite(sigma) && Number.isFinite(dose);
-      if (!known) flags.push('MC 1σ unknown (too few batches)');
+      if (!known) flags.push(MC_SIGMA_UNKNOWN);
       else if (!(sigma / dose <= 0.02)) flags.push('MC 1σ > 2 %');
       return {
         id: p.id,

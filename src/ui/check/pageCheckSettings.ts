@@ -4,6 +4,7 @@
 // A file without a setting opens with its default, as on the command line.
 import { DEFAULT_TOLERANCES } from '../../engine/check/tolerance';
 import { DEFAULT_DOSE_QUANTITY } from '../../engine/dose/doseQuantity';
+import { isMethodId } from '../../engine/methodRegistry';
 import type { LaminaCase } from '../../io/caseSchema';
 import type { CaseCheckSettings } from '../../io/checkSettingsSchema';
 import { caseWithCheckSettings } from '../../io/planFile';
@@ -18,7 +19,7 @@ export function pageCheckSettings(pointIds: readonly string[]): CaseCheckSetting
   };
   if (s.prescriptionDoseCGy !== null && pointIds.includes(s.prescriptionPointId))
     out.prescription = { pointId: s.prescriptionPointId, doseCGy: s.prescriptionDoseCGy };
-  if (s.checkMethodId) out.checkMethodId = s.checkMethodId;
+  if (isMethodId(s.checkMethodId)) out.checkMethodId = s.checkMethodId;
   return out;
 }
 

@@ -12,6 +12,7 @@ import {
   patchFirstBeam,
   useCheckStore,
 } from './checkStore';
+import { readTextFile } from '../readTextFile';
 
 /** Make a plan the check's beams: its first beam goes to the editor, the rest are extra beams. */
 export function loadPlan(plan: LaminaPlan): void {
@@ -60,7 +61,12 @@ export async function addBeamsFromFile(
   const file = e.target.files?.[0];
   e.target.value = '';
   if (!file) return;
-  const r = parsePlanText(await file.text());
+  const read = await readTextFile(file);
+  if (!read.ok) {
+    problemsNotice(file.name, [`(file): ${read.problem}`]);
+    return;
+  }
+  const r = parsePlanText(read.text);
   if (!r.ok) {
     problemsNotice(
       file.name,
@@ -83,5 +89,5 @@ export async function addBeamsFromFile(
       addExtraBeam({ id, label: b.label ?? b.case.name, weight: b.weight, case: b.case });
     }
   }
-  setNotice({ kind: 'info', title: `Opened ${file.name}`, lines: [] });
+  setNotice({ kind: 'info', title: `Opened ${file.name}`, lines: read.note ? [read.note] : [] });
 }

@@ -10,6 +10,7 @@ import type { PlanAnswer } from '../../compute/calculationService';
 import type { PlanReport } from '../../contract/reports';
 import type { PlanCheck } from '../../engine/check/planCheck';
 import { DEFAULT_DOSE_QUANTITY } from '../../engine/dose/doseQuantity';
+import { isMethodId } from '../../engine/methodRegistry';
 import type { LaminaCase } from '../../io/caseSchema';
 import { PLAN_FORMAT, PLAN_VERSION } from '../../io/planSchema';
 import type { LaminaPlan } from '../../io/planFile';
@@ -63,7 +64,7 @@ export function planOf(first: LaminaCase, s: CheckState): LaminaPlan {
   };
   if (s.prescriptionDoseCGy !== null && s.prescriptionPointId)
     plan.prescription = { pointId: s.prescriptionPointId, doseCGy: s.prescriptionDoseCGy };
-  if (s.checkMethodId) plan.checkMethodId = s.checkMethodId;
+  if (isMethodId(s.checkMethodId)) plan.checkMethodId = s.checkMethodId;
   plan.doseTo = s.doseTo;
   return plan;
 }

@@ -1,6 +1,7 @@
 // Pure helpers of the page's Monte Carlo run: the typed histories and seed checked with a message,
 // whether a run is the current case's (its key: src/compute/monteCarloRunKey), and the wording of
 // progress and uncertainty.
+import { historiesProblem, seedProblem } from '../../engine/montecarlo/runLimits';
 
 /** Histories per scenario offered as presets (case, water and calibration runs each get these). */
 export const HISTORY_PRESETS: readonly { histories: number; label: string }[] = [
@@ -10,8 +11,7 @@ export const HISTORY_PRESETS: readonly { histories: number; label: string }[] = 
   { histories: 5_000_000, label: '5 × 10⁶' },
 ];
 
-/** Bounds of a typed number of histories: enough for ten batches, not more than a long afternoon. */
-export const HISTORY_LIMITS = { min: 1_000, max: 50_000_000 } as const;
+export { HISTORY_LIMITS, SEED_LIMITS } from '../../engine/montecarlo/runLimits';
 
 export type Parsed<T> = { ok: true; value: T } | { ok: false; message: string };
 
@@ -25,22 +25,16 @@ function numberOfText(text: string): number {
 export function parseHistories(text: string): Parsed<number> {
   const v = numberOfText(text);
   if (!Number.isFinite(v)) return { ok: false, message: `Histories: "${text}" is not a number` };
-  if (!Number.isInteger(v)) return { ok: false, message: 'Histories: must be a whole number' };
-  if (v < HISTORY_LIMITS.min || v > HISTORY_LIMITS.max)
-    return {
-      ok: false,
-      message: `Histories: must be between ${groupDigits(HISTORY_LIMITS.min)} and ${groupDigits(HISTORY_LIMITS.max)}`,
-    };
-  return { ok: true, value: v };
+  const problem = historiesProblem(v);
+  return problem ? { ok: false, message: `Histories: ${problem}` } : { ok: true, value: v };
 }
 
 export function parseSeed(text: string): Parsed<number> {
   const v = numberOfText(text);
   if (!Number.isFinite(v) || !Number.isInteger(v))
     return { ok: false, message: `Seed: "${text}" is not a whole number` };
-  if (v < 0 || v > 0xffffffff)
-    return { ok: false, message: 'Seed: must be between 0 and 4 294 967 295' };
-  return { ok: true, value: v };
+  const problem = seedProblem(v);
+  return problem ? { ok: false, message: `Seed: ${problem}` } : { ok: true, value: v };
 }
 
 /** "1 000 000" (thin-space-free, plain spaces: readable and copyable). */

@@ -44,7 +44,9 @@ describe('Monte Carlo in the case calculation and the CLI', () => {
         ]),
       ),
     ).toEqual({ mc: { histories: 5000, seed: 9 } });
-    expect(() => mcOptionsOf(new Map([['mc-histories', 'many']]))).toThrow(/integer/);
+    expect(() => mcOptionsOf(new Map([['mc-histories', 'many']]))).toThrow(
+      '--mc-histories many: must be a number',
+    );
   });
 
   it('npm run calc -- case --mc-histories N --seed S --json includes monte-carlo, reproducibly', () => {

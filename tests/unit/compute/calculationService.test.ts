@@ -14,6 +14,22 @@ import { presetById } from '../../../src/state/presets';
 const chest = () => presetById('chest')!.make();
 
 describe('calculation service', () => {
+  it('a prescription given with the request for a point no beam has is refused, naming it', () => {
+    const c = chest();
+    const ask = (pointId: string) =>
+      calculatePlanRequest({
+        purpose: 'plan',
+        plan: c,
+        water: { kind: 'case' },
+        options: { methods: ['rtmr'], prescription: { pointId, doseCGy: 200 } },
+      });
+    expect(ask('NOPE')).toEqual({
+      ok: false,
+      problems: [{ path: 'prescription.pointId', message: 'no beam has a point "NOPE"' }],
+    });
+    expect(ask(c.points[0]!.id).ok).toBe(true);
+  });
+
   it("purpose 'preview' computes the fast methods on the coarse grid, 'full' all on the fine grid", () => {
     const p = calculateCaseRequest({ purpose: 'preview', case: chest(), water: { kind: 'case' } });
     const f = calculateCaseRequest({ purpose: 'full', case: chest(), water: { kind: 'case' } });

@@ -120,7 +120,7 @@ describe('calculateCase with type-A methods', () => {
 });
 
 describe('type-A results beyond the table', () => {
-  it('points deeper than the table are clamped, flagged and finite, never NaN', () => {
+  it('points near the table’s deep edge are finite; deeper ones are withheld, never NaN', () => {
     const tmr = 'd,5,10,20\n0,0.5,0.5,0.5\n1.5,1,1,1\n10,0.76,0.78,0.8\n20,0.52,0.53,0.55\n';
     const raw = JSON.parse(readFileSync('public/cases/lung-slab-6mv.json', 'utf8')) as Record<
       string,
@@ -140,7 +140,7 @@ describe('type-A results beyond the table', () => {
       expect(p?.cf === null || Number.isFinite(p?.cf)).toBe(true);
       for (const x of m.curve.dosePerMuCGy) expect(x === null || Number.isFinite(x)).toBe(true);
     }
-    // a 30 cm deep point in the same water: beyond the table's 20 cm → flagged
+    // a 30 cm deep point in the same water: beyond the table's 20 cm → withheld with the reason
     const deeper = validateCase({
       ...raw,
       points: [{ id: 'deeper', depthCm: 30 }],
@@ -149,8 +149,10 @@ describe('type-A results beyond the table', () => {
     });
     if (!deeper.ok) throw new Error(JSON.stringify(deeper.problems));
     const w = calculateCase(deeper.value, { methods: ['water'] }).methods[0];
-    expect(w?.points[0]?.flags.some((f) => /extrapolated: depth 30\.00 cm/.test(f))).toBe(true);
-    expect(w?.points[0]?.dosePerMuCGy).toBeGreaterThan(0);
+    expect(w?.points[0]?.flags).toContain(
+      'beyond the water data: TMR needed at 30.00 cm, the table ends at 20 cm (no value)',
+    );
+    expect(w?.points[0]?.dosePerMuCGy).toBeNull();
   });
 });
 

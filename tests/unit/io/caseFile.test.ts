@@ -48,10 +48,16 @@ describe('validateCase rejections name the field and the rule', () => {
     );
   });
 
-  it('density ≤ 0 or > 3 g/cm³', () => {
+  it('density below air (0.001 g/cm³) or > 3 g/cm³', () => {
     expect(problemsOf(edit((c) => (c.layers[0].densityGPerCm3 = 0)))).toContain(
-      'layers[0].densityGPerCm3: density must be > 0 g/cm³',
+      'layers[0].densityGPerCm3: density must be ≥ 0.001 g/cm³',
     );
+    // The smallest positive double is not a physical density: refused with the same rule.
+    expect(problemsOf(edit((c) => (c.layers[0].densityGPerCm3 = 5e-324)))).toContain(
+      'layers[0].densityGPerCm3: density must be ≥ 0.001 g/cm³',
+    );
+    // Dry air near sea level, 1.205e-3 g/cm³ (NIST SRD 126, Table 2), is accepted.
+    expect(validateCase(edit((c) => (c.layers[0].densityGPerCm3 = 0.001205))).ok).toBe(true);
     expect(problemsOf(edit((c) => (c.layers[2].densityGPerCm3 = 3.5)))).toContain(
       'layers[2].densityGPerCm3: density must be ≤ 3 g/cm³',
     );

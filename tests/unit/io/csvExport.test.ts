@@ -80,6 +80,14 @@ describe('CSV exports', () => {
     const back = parse(curvesCsv({ ...report, methods: [m] }));
     expect(back.meta.fields).toContain('stat_sigma_dose_per_mu_cgy');
     back.data.forEach((row, i) => expect(row.stat_sigma_dose_per_mu_cgy).toBe(sigma[i]));
+    // A withheld value (no uncertainty there) has an empty σ cell too, never "value empty, σ 0".
+    const gap: MethodResult = {
+      ...m,
+      curve: { ...m.curve, dosePerMuCGy: m.curve.dosePerMuCGy.map((v, i) => (i === 0 ? null : v)) },
+    };
+    const row0 = parse(curvesCsv({ ...report, methods: [gap] })).data[0]!;
+    expect(row0.stat_dose_per_mu_cgy).toBeNull();
+    expect(row0.stat_sigma_dose_per_mu_cgy).toBeNull();
   });
 
   it('pointCheckCsv(check) and totalCheckCsv(check) parse back to the check values', () => {
@@ -140,5 +148,43 @@ describe('CSV exports', () => {
     const totals = parse(totalCheckCsv(check));
     // Dose for the planning MU: 120 MU × σ per MU; the two beams add in quadrature.
     expect(totals.data[0]?.sigma_dose_cgy).toBeCloseTo(Math.hypot(120 * 0.008, 120 * 0.006), 9);
+  });
+});
+
+describe('CSV exports and spreadsheet formulas', () => {
+  const check = (pointId: string, beamId = 'AP') =>
+    checkPlan(
+      [
+        {
+          id: beamId,
+          label: beamId,
+          weight: 1,
+          planningMu: 130,
+          layers: [{ topCm: 0, bottomCm: 20, relativeElectronDensity: 1 }],
+          points: [{ id: pointId, depthCm: 10, planningDoseCGy: 100 }],
+          methods: [{ id: 'water', label: 'water', points: [{ id: pointId, dosePerMuCGy: 0.8 }] }],
+        },
+      ],
+      { tolerances: DEFAULT_TOLERANCES },
+    );
+
+  it.each(['=HYPERLINK("http://x","y")', '+1+1', '-2+3', '@SUM(A1)', '\tx', '\rx', '=1\n2'])(
+    'a point id %j is written with a leading apostrophe (text, not a formula)',
+    (id) => {
+      for (const csv of [pointCheckCsv(check(id)), totalCheckCsv(check(id))]) {
+        const row = parse(csv).data[0]!;
+        expect(row.point).toBe(`'${id}`);
+      }
+      // A beam id too.
+      expect(parse(pointCheckCsv(check('P', id))).data[0]!.beam).toBe(`'${id}`);
+    },
+  );
+
+  it('ordinary ids and negative numbers are written as they are', () => {
+    const rows = parse(pointCheckCsv(check('P1'))).data;
+    expect(rows[0]!.point).toBe('P1');
+    // 100/0.8 = 125 MU against 130: −3.846… %, a number in the file, not text.
+    expect(rows[0]!.mu_diff_percent).toBeCloseTo((100 * (125 - 130)) / 130, 12);
+    expect(pointCheckCsv(check('P1'))).not.toMatch(/'-/);
   });
 });

@@ -80,6 +80,16 @@ describe('plan files', () => {
     expect(!fmt.ok && fmt.problems.map((p) => p.path)).toContain('format');
   });
 
+  it('validatePlan(...) rejects an unknown check method, as the command line does (it fell back silently)', () => {
+    const r = validatePlan({ ...planDoc, checkMethodId: 'nonsense' });
+    expect(!r.ok && r.problems[0]).toEqual({
+      path: 'checkMethodId',
+      message:
+        'unknown method (expected one of water, rtmr, epl-pdd, batho, batho-modified, etar, pencil-beam, superposition, monte-carlo)',
+    });
+    expect(validatePlan({ ...planDoc, checkMethodId: 'etar' }).ok).toBe(true);
+  });
+
   it('every demo in public/cases/ is listed in its index and opens as a valid case or plan', () => {
     const index = JSON.parse(readFileSync('public/cases/index.json', 'utf8')) as {
       demos: { file: string; kind: 'case' | 'plan' }[];

@@ -5,7 +5,11 @@ import {
   runMonteCarlo,
 } from '../../../src/engine/montecarlo/runMonteCarlo';
 import { planMonteCarlo } from '../../../src/engine/montecarlo/monteCarloPlan';
-import { finalizeMonteCarlo } from '../../../src/engine/montecarlo/monteCarloResult';
+import {
+  finalizeMonteCarlo,
+  MC_SIGMA_UNKNOWN,
+} from '../../../src/engine/montecarlo/monteCarloResult';
+import { statistics } from '../../../src/engine/montecarlo/batchStatistics';
 import { runBatch } from '../../../src/engine/montecarlo/runBatch';
 import { lateralProfileAtDepth } from '../../../src/engine/montecarlo/planeProfile';
 import { stoppingPowerRatioWaterToMedium } from '../../../src/engine/dose/stoppingPowerRatio';
@@ -62,10 +66,47 @@ describe('Monte Carlo points with an unknown 1σ', () => {
       acc[scenarioIndex]!.add(runBatch(task));
     const one = finalizeMonteCarlo(plan, acc, GRID).method.points[0]!;
     expect(one.dosePerMuCGy).toBeNull();
-    expect(one.flags).toContain('MC 1σ unknown (too few batches)');
+    expect(one.flags).toContain(MC_SIGMA_UNKNOWN);
     // With every batch the value and a positive σ are there.
     const all = runMonteCarlo(c, { histories: 2000, seed: 5 }, GRID).method.points[0]!;
     expect(all.dosePerMuCGy).toBeGreaterThan(0);
     expect(all.sigmaDosePerMuCGy).toBeGreaterThan(0);
+  });
+});
+
+describe('Monte Carlo with too few histories for an uncertainty', () => {
+  it('runMonteCarlo(...) with 10 histories gives null values with the reason, never 0 ± 0', () => {
+    // 10 histories in 10 batches: most depth bins are scored by at most one batch (the CLI
+    // used to print a curve of 0 ± 0 here).
+    const grid = Array.from({ length: 21 }, (_, i) => i * 0.5);
+    const r = runMonteCarlo(
+      { ...CASE, points: [{ id: 'P', depthCm: 8 }] },
+      { histories: 10, seed: 1 },
+      grid,
+    );
+    const { dosePerMuCGy, cf, sigmaDosePerMuCGy } = r.method.curve;
+    let withheld = 0;
+    dosePerMuCGy.forEach((d, i) => {
+      if (d === null) withheld++;
+      // A value is shown only with a positive 1σ: zero dose with zero σ never appears.
+      else expect(sigmaDosePerMuCGy![i]).toBeGreaterThan(0);
+    });
+    cf.forEach((v, i) => {
+      if (v !== null) expect(r.method.curve.sigmaCf![i]).toBeGreaterThan(0);
+    });
+    expect(withheld).toBeGreaterThan(dosePerMuCGy.length / 2);
+    for (const p of r.method.points) {
+      if (p.dosePerMuCGy === null) expect(p.flags).toContain(MC_SIGMA_UNKNOWN);
+      else expect(p.sigmaDosePerMuCGy).toBeGreaterThan(0);
+    }
+  });
+
+  it('statistics(...) gives σ unknown in a bin scored by fewer than two batches', () => {
+    const batch = (v: number[]) => ({ values: Float64Array.from(v), histories: 10 });
+    const s = statistics([batch([0, 1, 2]), batch([0, 0, 3]), batch([0, 0, 1])]);
+    expect(Number.isNaN(s.sigma[0])).toBe(true); // nobody scored: not 0 ± 0
+    expect(Number.isNaN(s.sigma[1])).toBe(true); // one batch scored
+    expect(s.sigma[2]).toBeGreaterThan(0);
+    expect(s.mean[1]).toBeCloseTo(1 / 30, 12);
   });
 });

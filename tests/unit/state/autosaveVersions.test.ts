@@ -105,7 +105,7 @@ describe('versioned autosave entries', () => {
       check: {
         prescription: { pointId: demoCase.points[0]!.id, doseCGy: 180 },
         tolerances: { homogeneousPercent: 3, heterogeneousPercent: 4 },
-        checkMethodId: 'batho-modified',
+        checkMethodId: 'batho-modified' as const,
         doseTo: 'medium' as const,
       },
     };
@@ -211,5 +211,73 @@ describe('full or unavailable storage', () => {
     expect(loadCaseFromStorage(s)).toBeNull();
     expect(takeRestoreMessage()).toMatch(/could not be opened/);
     expect(takeRestoreMessage()).toBeNull();
+  });
+});
+
+describe('lenient restore says what it left out and keeps the entry', () => {
+  // A case saved mid-edit: P1 at 15 cm below a phantom thinned to 11 cm (not valid as a whole).
+  const midEdit = () => {
+    const c = structuredClone(demoCase) as typeof demoCase & Record<string, unknown>;
+    c.layers = c.layers.slice(0, 2);
+    return c;
+  };
+  const entryOf = (c: unknown) =>
+    JSON.stringify({ format: AUTOSAVE_FORMAT, version: 2, savedAt: null, case: c });
+
+  it('keeps the notes of a case restored leniently (they used to be dropped silently)', () => {
+    const c = { ...midEdit(), notes: 'measured on 3 March' };
+    const s = new FakeStorage();
+    s.setItem(AUTOSAVE_KEY, entryOf(c));
+    const r = restoreAutosave(s);
+    expect(r.value?.notes).toBe('measured on 3 March');
+    expect(r.value?.points.map((p) => p.id)).toEqual(['P1', 'in-lung']);
+    expect(r.message).toBeNull();
+    expect(s.backups()).toEqual([]);
+  });
+
+  it('names a broken water table it leaves out, and keeps the entry under a backup key', () => {
+    const c = {
+      ...midEdit(),
+      waterData: { kind: 'tmr', fileName: 'bad.csv', csv: 'depth,10\n0,abc\n' },
+    };
+    const text = entryOf(c);
+    const s = new FakeStorage();
+    s.setItem(AUTOSAVE_KEY, text);
+    const r = restoreAutosave(s);
+    expect(r.value?.waterData).toBeUndefined();
+    expect(r.message).toMatch(
+      /^The autosaved case was restored without the measured water table \(bad\.csv: .+\)\. The entry as it was is kept unchanged in this browser's storage under "lamina\.autosave\.backup\.[0-9a-f]{8}"\.$/,
+    );
+    const [[key, kept]] = s.backups() as [[string, string]];
+    expect(kept).toBe(text);
+    expect(r.message).toContain(`"${key}"`);
+    // The next autosave replaces the main entry; the backup stays, and a reload restores cleanly.
+    expect(saveCaseToStorage(s, r.value!)).toEqual({ ok: true });
+    expect(s.getItem(key)).toBe(text);
+    expect(restoreAutosave(s).message).toBeNull();
+  });
+
+  it('names over-long notes and unknown fields it leaves out', () => {
+    const c = { ...midEdit(), notes: 'x'.repeat(6000), colour: 'red' };
+    const s = new FakeStorage();
+    s.setItem(AUTOSAVE_KEY, entryOf(c));
+    const r = restoreAutosave(s);
+    expect(r.value?.notes).toBeUndefined();
+    expect(r.message).toMatch(
+      /without the notes \(notes must be at most 5000 characters\); unknown field "colour"\./,
+    );
+  });
+
+  it('never overwrites an entry read only in part that it could not back up', () => {
+    const c = { ...midEdit(), waterData: { kind: 'tmr', fileName: 'b.csv', csv: 'x' } };
+    const text = entryOf(c);
+    const s = new FakeStorage(AUTOSAVE_KEY.length + text.length + 10);
+    s.setItem(AUTOSAVE_KEY, text);
+    const r = restoreAutosave(s);
+    expect(r.value).not.toBeNull();
+    expect(r.message).toMatch(/could not be backed up \(storage is full\).*will not overwrite/);
+    const saved = saveCaseToStorage(s, r.value!);
+    expect(saved.ok).toBe(false);
+    expect(s.getItem(AUTOSAVE_KEY)).toBe(text);
   });
 });
