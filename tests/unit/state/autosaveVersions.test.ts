@@ -268,6 +268,22 @@ describe('lenient restore says what it left out and keeps the entry', () => {
     );
   });
 
+  it('names a check block it leaves out (an unknown deciding method) and keeps the rest', () => {
+    const c = {
+      ...midEdit(),
+      check: { checkMethodId: 'no-such-method', doseTo: 'medium' },
+    };
+    const s = new FakeStorage();
+    s.setItem(AUTOSAVE_KEY, entryOf(c));
+    const r = restoreAutosave(s);
+    expect(r.value?.check).toBeUndefined();
+    expect(r.value?.points.map((p) => p.id)).toEqual(['P1', 'in-lung']);
+    expect(r.message).toMatch(
+      /without the check settings \(unknown method \(expected one of water, /,
+    );
+    expect(s.backups()).toHaveLength(1);
+  });
+
   it('never overwrites an entry read only in part that it could not back up', () => {
     const c = { ...midEdit(), waterData: { kind: 'tmr', fileName: 'b.csv', csv: 'x' } };
     const text = entryOf(c);
