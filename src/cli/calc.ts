@@ -6,9 +6,11 @@ import { runBatch } from './batch';
 import { calculateDocument, jsonOf, loadDocument, planOptionsOf, textOf } from './checkCommand';
 import { WATER_TABLE_USAGE, waterTableFromFlags } from './waterTableArgs';
 import { MC_USAGE, mcOptionsOf } from './mcArgs';
+import { DICOM_USAGE, runDicomCommand } from './dicomCommand';
 
 const USAGE = `Usage: npm run calc -- <case.json | plan.json> [--json] [--methods id,id,...]
        npm run calc -- --batch <file> <file> ...   (one summary row per file; exit 1 if any check fails or is uncertain)
+       npm run calc -- --dicom DIR [--json] [--write-plan out.json]   (CT + RT Plan: prints lamina.plancalc)
   --json          print one JSON document (format "lamina.calc" with a "check" section; a plan
                   file prints "lamina.plancalc")
   --methods LIST  comma-separated method ids to compute (default: all available)
@@ -16,7 +18,8 @@ const USAGE = `Usage: npm run calc -- <case.json | plan.json> [--json] [--method
   --prescribe P=D  total dose D (cGy) at point P from all beams: prints the MU per beam
   --check-method ID  method whose verdict decides the check (default: rtmr when available)
 ${WATER_TABLE_USAGE}
-${MC_USAGE}`;
+${MC_USAGE}
+${DICOM_USAGE}`;
 
 function main(argv: string[]): number {
   let args;
@@ -71,4 +74,6 @@ function main(argv: string[]): number {
   return 0;
 }
 
-process.exitCode = main(process.argv.slice(2));
+if (process.argv.includes('--dicom'))
+  void runDicomCommand(process.argv.slice(2), USAGE).then((code) => (process.exitCode = code));
+else process.exitCode = main(process.argv.slice(2));

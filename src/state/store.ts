@@ -12,7 +12,7 @@ export type Normalisation = 'dosePerMu' | 'percentWaterDmax' | 'relativeToWater'
 export type Theme = 'auto' | 'light' | 'dark';
 /** Which water data the type-A methods read: the modelled beam, or the table in the case. */
 export type WaterSource = 'modelled' | 'table';
-export type ViewTab = 'dose' | 'cf' | 'water' | 'plane' | 'mc' | 'check';
+export type ViewTab = 'dose' | 'cf' | 'water' | 'plane' | 'mc' | 'check' | 'dicom';
 
 export interface FieldDraft {
   text: string;
