@@ -5,6 +5,7 @@
 //   AP (gantry 0):   water 10 cm to the isocentre (SSD 90 cm);
 //   left (gantry 90): water 5 cm, lung 8 cm, water 2 cm to the isocentre (SSD 85 cm);
 //   PA (gantry 180): water 10 cm (SSD 90 cm);  right (gantry 270): water 15 cm (SSD 85 cm).
+// Planning MU and doses are invented for the journeys (50 cGy a beam, MU of a typical 6 MV beam).
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import {
@@ -16,9 +17,9 @@ import {
 } from './dicomPhantom';
 
 export const BOX_BEAMS = [
-  { number: 1, name: 'AP', gantryDeg: 0, ssdCm: 90, isoDepthCm: 10, meterset: 110, doseGy: 0.5 },
-  { number: 2, name: 'LEFT', gantryDeg: 90, ssdCm: 85, isoDepthCm: 15, meterset: 95, doseGy: 0.5 },
-  { number: 3, name: 'PA', gantryDeg: 180, ssdCm: 90, isoDepthCm: 10, meterset: 112, doseGy: 0.5 },
+  { number: 1, name: 'AP', gantryDeg: 0, ssdCm: 90, isoDepthCm: 10, meterset: 63, doseGy: 0.5 },
+  { number: 2, name: 'LEFT', gantryDeg: 90, ssdCm: 85, isoDepthCm: 15, meterset: 61, doseGy: 0.5 },
+  { number: 3, name: 'PA', gantryDeg: 180, ssdCm: 90, isoDepthCm: 10, meterset: 63, doseGy: 0.5 },
   {
     number: 4,
     name: 'RIGHT',

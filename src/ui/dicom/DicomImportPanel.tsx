@@ -194,6 +194,10 @@ export function DicomImportPanel() {
           {SLAB_MODEL_CAUTION} Check each beam&apos;s profile and slabs before use. MLC apertures,
           wedges, arcs and compressed CT are not handled.
         </p>
+        <p data-testid="dicom-calibration-note">
+          The default HU → ρe calibration is generic, from memory: replace it with your
+          scanner&apos;s.
+        </p>
       </aside>
       <DropZone />
       {phase === 'failed' ? (
