@@ -22,8 +22,7 @@ const UNDEFINED_LENGTH = 0xffffffff;
 function reasonOf(e: unknown): string {
   if (typeof e === 'string') return e;
   if (e instanceof Error) return e.message;
-  if (typeof e === 'object' && e !== null && 'exception' in e)
-    return reasonOf((e).exception);
+  if (typeof e === 'object' && e !== null && 'exception' in e) return reasonOf(e.exception);
   return String(e);
 }
 

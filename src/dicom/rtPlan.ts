@@ -50,7 +50,7 @@ export interface RtPlanInfo {
 export type RtPlanResult = { ok: true; plan: RtPlanInfo } | { ok: false; message: string };
 
 const items = (ds: DataSet, tag: string): DataSet[] =>
-  ((ds.elements[tag])?.items ?? [])
+  (ds.elements[tag]?.items ?? [])
     .map((i) => i.dataSet)
     .filter((d): d is DataSet => d !== undefined);
 

@@ -18,7 +18,10 @@ async function openImport(page: Page) {
 
 /** Drop files on the drop zone as a person dragging them from a file manager would. */
 async function dropFiles(page: Page, files: readonly NamedBytes[]) {
-  const payload = files.map((f) => ({ name: f.name, b64: Buffer.from(f.bytes).toString('base64') }));
+  const payload = files.map((f) => ({
+    name: f.name,
+    b64: Buffer.from(f.bytes).toString('base64'),
+  }));
   const dt = await page.evaluateHandle((list) => {
     const t = new DataTransfer();
     for (const f of list) {
@@ -33,7 +36,9 @@ async function dropFiles(page: Page, files: readonly NamedBytes[]) {
   await page.getByTestId('dicom-drop').dispatchEvent('drop', { dataTransfer: dt });
 }
 
-test('a dropped CT series and RT Plan become a checked plan of slab beams', async ({ page }, testInfo) => {
+test('a dropped CT series and RT Plan become a checked plan of slab beams', async ({
+  page,
+}, testInfo) => {
   const origin = new URL(testInfo.project.use.baseURL ?? 'http://127.0.0.1').origin;
   const outside: string[] = [];
   page.on('request', (r) => {
@@ -44,7 +49,9 @@ test('a dropped CT series and RT Plan become a checked plan of slab beams', asyn
   await expect(page.getByTestId('dicom-calibration-note')).toContainText('generic, from memory');
   await dropFiles(page, boxPlanFiles());
   await expect(page.getByTestId('dicom-summary')).toContainText('RT Plan “BOX 4F”: 4 beams');
-  await expect(page.getByTestId('dicom-calibration-caution')).toContainText('generic and from memory');
+  await expect(page.getByTestId('dicom-calibration-caution')).toContainText(
+    'generic and from memory',
+  );
   await expect(page.getByTestId('dicom-summary')).toContainText('31 slices');
   // SSD and isocentre depth within one voxel (4 mm) of the box geometry (tests/helpers/dicomFixtures.ts).
   for (const b of BOX_BEAMS) {
@@ -60,20 +67,27 @@ test('a dropped CT series and RT Plan become a checked plan of slab beams', asyn
   const profile = page.getByTestId('dicom-profile-beam-2');
   await expect(profile.locator('path.profile-ct')).toHaveAttribute('d', /^M/);
   await expect(profile.locator('rect.profile-slab')).toHaveCount(3);
-  await page.getByTestId('dicom-beam-beam-2').screenshot({ path: testInfo.outputPath('profile-left.png') });
+  await page
+    .getByTestId('dicom-beam-beam-2')
+    .screenshot({ path: testInfo.outputPath('profile-left.png') });
   await page.screenshot({ path: testInfo.outputPath('import.png'), fullPage: true });
 
   // Edit the lung slab to cortical bone: the chart follows, the table says edited.
   await page.getByTestId('dicom-slab-beam-2-1-material').selectOption('corticalBone');
   await expect(left.locator('caption')).toContainText('(edited)');
-  await page.getByTestId('dicom-beam-beam-2').screenshot({ path: testInfo.outputPath('profile-edited.png') });
+  await page
+    .getByTestId('dicom-beam-beam-2')
+    .screenshot({ path: testInfo.outputPath('profile-edited.png') });
   await page.getByTestId('dicom-reset-beam-2').click();
   await expect(left.locator('caption')).toContainText('(from the CT)');
   await page.getByTestId('dicom-slab-beam-2-0-thickness').fill('5');
   await expect(left.locator('caption')).toContainText('(edited)');
 
   await page.getByTestId('dicom-use').click();
-  await expect(page.getByRole('tab', { name: 'Point check & report' })).toHaveAttribute('aria-selected', 'true');
+  await expect(page.getByRole('tab', { name: 'Point check & report' })).toHaveAttribute(
+    'aria-selected',
+    'true',
+  );
   await expect(page.getByTestId('file-notice')).toContainText('4 beams at point ISO');
   await expect(page.getByTestId('check-beams').locator('tbody tr')).toHaveCount(4);
   await expect(page.getByTestId('check-total-table')).toBeVisible();
@@ -88,14 +102,22 @@ test('a dropped CT series and RT Plan become a checked plan of slab beams', asyn
   expect(outside).toEqual([]);
 });
 
-test('files the import cannot read are refused with messages naming the problem', async ({ page }) => {
+test('files the import cannot read are refused with messages naming the problem', async ({
+  page,
+}) => {
   await openImport(page);
   const files = boxPlanFiles();
   // A CT slice cut short, and a plan in a compressed transfer syntax.
   const cut = { name: 'CT.cut.dcm', bytes: files[3]!.bytes.slice(0, files[3]!.bytes.length - 100) };
-  await page.getByTestId('dicom-files-input').setInputFiles(
-    [...files.slice(0, 3), cut].map((f) => ({ name: f.name, mimeType: 'application/dicom', buffer: Buffer.from(f.bytes) })),
-  );
+  await page
+    .getByTestId('dicom-files-input')
+    .setInputFiles(
+      [...files.slice(0, 3), cut].map((f) => ({
+        name: f.name,
+        mimeType: 'application/dicom',
+        buffer: Buffer.from(f.bytes),
+      })),
+    );
   await expect(page.getByTestId('dicom-problems')).toContainText('CT.cut.dcm: file is truncated');
   const jpeg = writeRtPlan({ label: 'X', patientPosition: 'HFS', beams: [] });
   const relabelled = Buffer.from(jpeg.bytes);

@@ -12,7 +12,10 @@ describe('dicomImportApi over comlink', () => {
     const { port1, port2 } = new MessageChannel();
     Comlink.expose(dicomImportApi, port1 as unknown as Comlink.Endpoint);
     const remote = Comlink.wrap<DicomImportApi>(port2 as unknown as Comlink.Endpoint);
-    const files = boxPlanFiles().map((f) => ({ name: f.name, blob: new Blob([f.bytes as Uint8Array<ArrayBuffer>]) }));
+    const files = boxPlanFiles().map((f) => ({
+      name: f.name,
+      blob: new Blob([f.bytes as Uint8Array<ArrayBuffer>]),
+    }));
     const seen: ImportProgress[] = [];
     const r = await remote.importFiles(
       files,
@@ -23,7 +26,9 @@ describe('dicomImportApi over comlink', () => {
     expect(r.value.beams).toHaveLength(4);
     expect(r.value.beams[0]!.ray!.hu).toBeInstanceOf(Float32Array);
     // Progress calls travel on the proxy's own channel and may land after the result.
-    await vi.waitFor(() => expect(seen.filter((p) => p.stage === 'reading')).toHaveLength(files.length));
+    await vi.waitFor(() =>
+      expect(seen.filter((p) => p.stage === 'reading')).toHaveLength(files.length),
+    );
     port1.close();
     port2.close();
   });
