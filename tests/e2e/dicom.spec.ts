@@ -109,15 +109,13 @@ test('files the import cannot read are refused with messages naming the problem'
   const files = boxPlanFiles();
   // A CT slice cut short, and a plan in a compressed transfer syntax.
   const cut = { name: 'CT.cut.dcm', bytes: files[3]!.bytes.slice(0, files[3]!.bytes.length - 100) };
-  await page
-    .getByTestId('dicom-files-input')
-    .setInputFiles(
-      [...files.slice(0, 3), cut].map((f) => ({
-        name: f.name,
-        mimeType: 'application/dicom',
-        buffer: Buffer.from(f.bytes),
-      })),
-    );
+  await page.getByTestId('dicom-files-input').setInputFiles(
+    [...files.slice(0, 3), cut].map((f) => ({
+      name: f.name,
+      mimeType: 'application/dicom',
+      buffer: Buffer.from(f.bytes),
+    })),
+  );
   await expect(page.getByTestId('dicom-problems')).toContainText('CT.cut.dcm: file is truncated');
   const jpeg = writeRtPlan({ label: 'X', patientPosition: 'HFS', beams: [] });
   const relabelled = Buffer.from(jpeg.bytes);
