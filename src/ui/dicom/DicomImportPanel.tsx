@@ -44,29 +44,37 @@ async function runImport(files: NamedBlob[]): Promise<void> {
   }
 }
 
-function DropZone() {
-  const phase = useDicomImportStore((s) => s.phase);
-  const progress = useDicomImportStore((s) => s.progress);
-  const count = useDicomImportStore((s) => s.fileCount);
+/** Drop handlers for the whole panel (files dropped anywhere on it are imported). */
+function useDrop() {
   const [over, setOver] = useState(false);
-  const onDrop = (e: DragEvent) => {
-    e.preventDefault();
-    e.stopPropagation();
-    setOver(false);
-    void filesFromDrop(e.dataTransfer).then(runImport);
-  };
-  return (
-    <div
-      className={`dicom-drop${over ? ' over' : ''}`}
-      data-testid="dicom-drop"
-      onDragOver={(e) => {
+  return {
+    over,
+    handlers: {
+      onDragOver: (e: DragEvent) => {
+        if (!e.dataTransfer.types.includes('Files')) return;
         e.preventDefault();
         e.stopPropagation();
         setOver(true);
-      }}
-      onDragLeave={() => setOver(false)}
-      onDrop={onDrop}
-    >
+      },
+      onDragLeave: (e: DragEvent) => {
+        if (!e.currentTarget.contains(e.relatedTarget as Node | null)) setOver(false);
+      },
+      onDrop: (e: DragEvent) => {
+        e.preventDefault();
+        e.stopPropagation();
+        setOver(false);
+        void filesFromDrop(e.dataTransfer).then(runImport);
+      },
+    },
+  };
+}
+
+function DropZone({ over }: { over: boolean }) {
+  const phase = useDicomImportStore((s) => s.phase);
+  const progress = useDicomImportStore((s) => s.progress);
+  const count = useDicomImportStore((s) => s.fileCount);
+  return (
+    <div className={`dicom-drop${over ? ' over' : ''}`} data-testid="dicom-drop">
       <p>
         <strong>Drop a folder or the DICOM files here</strong>: the planning CT series
         (uncompressed, Implicit or Explicit VR Little Endian) and its RT Plan.
@@ -147,6 +155,7 @@ export function DicomImportPanel() {
   const edits = useDicomImportStore((s) => s.edits);
   const [ref, width] = useElementWidth<HTMLDivElement>();
   const [useProblems, setUseProblems] = useState<string[]>([]);
+  const drop = useDrop();
   const settings = useMemo(() => settingsOfDraft(draft), [draft]);
   const analysed = useMemo(
     () => (imp && settings.ok ? analyseAll(imp, settings.settings) : []),
@@ -183,7 +192,7 @@ export function DicomImportPanel() {
     });
   };
   return (
-    <div className="dicom-panel" ref={ref} data-testid="dicom-panel">
+    <div className="dicom-panel" ref={ref} data-testid="dicom-panel" {...drop.handlers}>
       <h2>Patient import (DICOM)</h2>
       <aside className="dicom-cautions" aria-label="Import cautions">
         <p>
@@ -199,7 +208,7 @@ export function DicomImportPanel() {
           scanner&apos;s.
         </p>
       </aside>
-      <DropZone />
+      <DropZone over={drop.over} />
       {phase === 'failed' ? (
         <div className="notice error" role="alert" data-testid="dicom-problems">
           <strong>The files were not imported.</strong>

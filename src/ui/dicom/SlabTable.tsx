@@ -1,5 +1,5 @@
 // The slabs of one beam, editable before use: thickness, material and density (blank = the
-// material's default). Each edit replaces the beam's slab list; "Back to the CT slabs" drops it.
+// material's default; a new material starts at its default). Each edit replaces the beam's slab list; "Back to the CT slabs" drops it.
 import type { Slab } from '../../dicom/analyseBeam';
 import { rhoEOfMaterial } from '../../dicom/materialMapping';
 import { allMaterials, type MaterialId } from '../../engine/materials/materialLibrary';
@@ -65,7 +65,13 @@ export function SlabTable(props: {
                   aria-label={`Slab ${i + 1} material`}
                   value={s.materialId}
                   data-testid={`dicom-slab-${beamId}-${i}-material`}
-                  onChange={(e) => patch(i, { materialId: e.target.value as MaterialId })}
+                  onChange={(e) =>
+                    // A new material starts at its own default density.
+                    patch(i, {
+                      materialId: e.target.value as MaterialId,
+                      densityGPerCm3: undefined,
+                    })
+                  }
                 >
                   {allMaterials().map((m) => (
                     <option key={m.id} value={m.id}>
