@@ -75,9 +75,10 @@ test('a dropped CT series and RT Plan become a checked plan of slab beams', asyn
   // Edit the lung slab to cortical bone: the chart follows, the table says edited.
   await page.getByTestId('dicom-slab-beam-2-1-material').selectOption('corticalBone');
   await expect(left.locator('caption')).toContainText('(edited)');
-  // A new material starts at its default density: cortical bone, ρe 1.78 (ICRU-44 via NIST SRD 126).
+  // A new material starts at its default density: cortical bone, ρe = 1.92 g/cm³ × Z/A 0.51478 /
+  // 0.55508 (water) = 1.781 (NIST SRD 126 Table 2, ICRU-44 compositions).
   await expect(page.getByTestId('dicom-slab-beam-2-1-density')).toHaveValue('');
-  await expect(left.locator('tbody tr').nth(1).locator('td').last()).toHaveText('1.780');
+  await expect(left.locator('tbody tr').nth(1).locator('td').last()).toHaveText('1.781');
   await page
     .getByTestId('dicom-beam-beam-2')
     .screenshot({ path: testInfo.outputPath('profile-edited.png') });
