@@ -74,6 +74,6 @@ function main(argv: string[]): number {
   return 0;
 }
 
-if (process.argv.includes('--dicom'))
+if (process.argv.some((a) => a === '--dicom' || a.startsWith('--dicom=')))
   void runDicomCommand(process.argv.slice(2), USAGE).then((code) => (process.exitCode = code));
 else process.exitCode = main(process.argv.slice(2));

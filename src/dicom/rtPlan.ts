@@ -94,7 +94,8 @@ function jawsOf(cp: DataSet): Jaws {
   return out;
 }
 
-const rad = (deg: number) => ((deg % 360) + 360) % 360;
+/** An angle in [0, 360) degrees. */
+const wrapDeg = (deg: number) => ((deg % 360) + 360) % 360;
 
 /** The first reason a control point after the first changes what Lamina treats as static. */
 function dynamicChange(first: DataSet, cp: DataSet, firstJaws: Jaws): string | null {
@@ -107,7 +108,7 @@ function dynamicChange(first: DataSet, cp: DataSet, firstJaws: Jaws): string | n
   for (const [tag, what] of checks) {
     const v = cp.floatString(tag);
     const v0 = first.floatString(tag);
-    if (v !== undefined && v0 !== undefined && Math.abs(rad(v) - rad(v0)) > 1e-3)
+    if (v !== undefined && v0 !== undefined && Math.abs(wrapDeg(v) - wrapDeg(v0)) > 1e-3)
       return `${what} changes from ${v0} to ${v} between control points (an arc or dynamic beam)`;
   }
   const iso = vec(cp, TAG.isocenterPosition);

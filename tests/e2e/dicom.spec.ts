@@ -3,7 +3,8 @@
 // profile looked at, a slab edited, the plan checked; files that cannot be read refused with
 // messages; no request leaves the page's origin.
 import { expect, test, type Page } from '@playwright/test';
-import { BOX_BEAMS, BOX_SPACING, boxPlanFiles } from '../helpers/dicomFixtures';
+import { join } from 'node:path';
+import { BOX_BEAMS, BOX_SPACING, boxPlanFiles, writeFiles } from '../helpers/dicomFixtures';
 import { writeRtPlan } from '../helpers/dicomPhantom';
 import type { NamedBytes } from '../helpers/dicomPhantom';
 
@@ -128,4 +129,16 @@ test('files the import cannot read are refused with messages naming the problem'
     { name: 'plan.dcm', mimeType: 'application/dicom', buffer: relabelled },
   ]);
   await expect(page.getByTestId('dicom-problems')).toContainText('no Beam Sequence');
+});
+
+test('a folder picked with the folder input is read with its subfolders', async ({
+  page,
+}, testInfo) => {
+  await openImport(page);
+  const dir = testInfo.outputPath('patient');
+  writeFiles(join(dir, 'CT'), boxPlanFiles().slice(0, -1));
+  writeFiles(join(dir, 'plan'), boxPlanFiles().slice(-1));
+  await page.getByTestId('dicom-folder-input').setInputFiles(dir);
+  await expect(page.getByTestId('dicom-summary')).toContainText('RT Plan “BOX 4F”: 4 beams');
+  await expect(page.getByTestId('dicom-profile-beam-4')).toBeVisible();
 });
