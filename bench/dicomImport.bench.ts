@@ -5,12 +5,8 @@ import { performance } from 'node:perf_hooks';
 import { analyseAll, planOfAnalysed } from '../src/dicom/importPipeline';
 import { importDicom } from '../src/dicom/importDicom';
 import { defaultImportSettings } from '../src/dicom/importSettings';
-import {
-  boxPhantomHu,
-  gridCovering,
-  writeCtSeries,
-  writeRtPlan,
-} from '../tests/helpers/dicomPhantom';
+import { gridCovering, writeCtSeries, writeRtPlan } from '../tests/helpers/dicomPhantom';
+import { boxPhantomHu } from '../tests/helpers/phantomShapes';
 import type { BenchFigure } from './lib/row';
 
 export const repeats = 3;

@@ -8,13 +8,8 @@
 // Planning MU and doses are invented for the journeys (50 cGy a beam, MU of a typical 6 MV beam).
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import {
-  boxPhantomHu,
-  gridCovering,
-  writeCtSeries,
-  writeRtPlan,
-  type NamedBytes,
-} from './dicomPhantom';
+import { gridCovering, writeCtSeries, writeRtPlan, type NamedBytes } from './dicomPhantom';
+import { boxPhantomHu } from './phantomShapes';
 
 export const BOX_BEAMS = [
   { number: 1, name: 'AP', gantryDeg: 0, ssdCm: 90, isoDepthCm: 10, meterset: 63, doseGy: 0.5 },

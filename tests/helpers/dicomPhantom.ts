@@ -1,7 +1,6 @@
 // Synthetic CT series and RT Plans for tests, written as real DICOM Part 10 files by
-// dicomWriter.ts: slab phantoms of known geometry (layers perpendicular to a given beam direction,
-// a cylinder of given radius around the beam axis, air elsewhere) on an axial grid, and plans with
-// the beam parameters set explicitly. Attribute choices follow the CT Image IOD (PS3.3 A.3) and
+// dicomWriter.ts: any HU function of position (phantomShapes.ts: slab stacks along a beam, boxes)
+// on an axial grid, and plans with the beam parameters set explicitly. Attribute choices follow the CT Image IOD (PS3.3 A.3) and
 // the RT Plan IOD (PS3.3 A.20); UIDs use the 2.25 (UUID-derived) root (PS3.5 B.2).
 import { ds, is, seq, str, us, ow, writePart10, type DicomItem, type Syntax } from './dicomWriter';
 
@@ -23,7 +22,6 @@ export const cross = (a: Vec3, b: Vec3): Vec3 => [
   a[2] * b[0] - a[0] * b[2],
   a[0] * b[1] - a[1] * b[0],
 ];
-const dot = (a: Vec3, b: Vec3) => a[0] * b[0] + a[1] * b[1] + a[2] * b[2];
 const add = (a: Vec3, b: Vec3, s = 1): Vec3 => [a[0] + s * b[0], a[1] + s * b[1], a[2] + s * b[2]];
 
 export interface CtGrid {
@@ -308,80 +306,5 @@ export function writeRtPlan(spec: PlanSpec): NamedBytes {
       sopClassUid: RT_PLAN,
       sopInstanceUid: '2.25.66666666666666666666666666666',
     }),
-  };
-}
-
-export interface SlabLayer {
-  thicknessMm: number;
-  hu: number;
-}
-
-/**
- * HU of a slab phantom: layers perpendicular to the unit beam direction `dir` (source → isocentre),
- * the first face `isoDepthMm` upstream of the isocentre, inside a cylinder of `radiusMm` about
- * the beam axis; air (−1000 HU) elsewhere.
- */
-export function slabPhantomHu(o: {
-  isoMm: Vec3;
-  dir: Vec3;
-  isoDepthMm: number;
-  layers: readonly SlabLayer[];
-  radiusMm: number;
-}): (p: Vec3) => number {
-  const front = add(o.isoMm, o.dir, -o.isoDepthMm);
-  const bounds: number[] = [];
-  let t = 0;
-  for (const l of o.layers) bounds.push((t += l.thicknessMm));
-  return (p) => {
-    const rel = add(p, front, -1);
-    const depth = dot(rel, o.dir);
-    if (depth < 0 || depth > t) return -1000;
-    const lateral = add(rel, o.dir, -depth);
-    if (dot(lateral, lateral) > o.radiusMm * o.radiusMm) return -1000;
-    const k = bounds.findIndex((b) => depth <= b);
-    return (o.layers[k] as SlabLayer).hu;
-  };
-}
-
-/** The corners of the box bounding the slab cylinder (for gridCovering), with a margin. */
-export function slabPhantomBounds(
-  o: { isoMm: Vec3; dir: Vec3; isoDepthMm: number; layers: readonly SlabLayer[]; radiusMm: number },
-  marginMm: number,
-): { min: Vec3; max: Vec3 } {
-  const total = o.layers.reduce((s, l) => s + l.thicknessMm, 0);
-  const a = add(o.isoMm, o.dir, -o.isoDepthMm);
-  const b = add(a, o.dir, total);
-  const min: number[] = [];
-  const max: number[] = [];
-  for (let k = 0; k < 3; k++) {
-    // A disc of radius r perpendicular to dir extends r·sqrt(1 − dir_k²) along axis k.
-    const r = o.radiusMm * Math.sqrt(Math.max(0, 1 - (o.dir[k] as number) ** 2));
-    min.push(Math.min(a[k] as number, b[k] as number) - r - marginMm);
-    max.push(Math.max(a[k] as number, b[k] as number) + r + marginMm);
-  }
-  return { min: min as unknown as Vec3, max: max as unknown as Vec3 };
-}
-
-export interface HuBox {
-  minMm: Vec3;
-  maxMm: Vec3;
-  hu: number;
-}
-
-/** HU of nested boxes (the last box containing the point wins); air (−1000 HU) outside all. */
-export function boxPhantomHu(boxes: readonly HuBox[]): (p: Vec3) => number {
-  return (p) => {
-    let hu = -1000;
-    for (const b of boxes)
-      if (
-        p[0] >= b.minMm[0] &&
-        p[0] <= b.maxMm[0] &&
-        p[1] >= b.minMm[1] &&
-        p[1] <= b.maxMm[1] &&
-        p[2] >= b.minMm[2] &&
-        p[2] <= b.maxMm[2]
-      )
-        hu = b.hu;
-    return hu;
   };
 }

@@ -5,16 +5,14 @@ import { importDicom, type DicomImport, type DicomSource } from '../../src/dicom
 import { defaultImportSettings, type ImportSettings } from '../../src/dicom/importSettings';
 import {
   gridCovering,
-  slabPhantomBounds,
-  slabPhantomHu,
   writeCtSeries,
   writeRtPlan,
   type NamedBytes,
   type PatientPosition,
   type PlanBeamSpec,
-  type SlabLayer,
   type Vec3,
 } from './dicomPhantom';
+import { slabPhantomBounds, slabPhantomHu, type SlabLayer } from './phantomShapes';
 import type { Syntax } from './dicomWriter';
 
 export interface SlabScenario {

@@ -15,7 +15,8 @@
 import { describe, expect, it } from 'vitest';
 import { rhoEOfHu, defaultCalibration } from '../../src/dicom/calibration';
 import { analyseScenario, type SlabScenario } from '../helpers/dicomScenario';
-import type { PatientPosition, SlabLayer, Vec3 } from '../helpers/dicomPhantom';
+import type { PatientPosition, Vec3 } from '../helpers/dicomPhantom';
+import type { SlabLayer } from '../helpers/phantomShapes';
 
 const rad = (d: number) => (d * Math.PI) / 180;
 function sourceAt(position: PatientPosition, g: number, couch: 0 | 90): Vec3 {
