@@ -40,6 +40,8 @@ async function dropFiles(page: Page, files: readonly NamedBytes[]) {
 test('a dropped CT series and RT Plan become a checked plan of slab beams', async ({
   page,
 }, testInfo) => {
+  // A long journey (import, edits, a four-beam check, a beam swap): room for a loaded machine.
+  test.setTimeout(120_000);
   const origin = new URL(testInfo.project.use.baseURL ?? 'http://127.0.0.1').origin;
   const outside: string[] = [];
   page.on('request', (r) => {
