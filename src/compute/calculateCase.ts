@@ -201,7 +201,11 @@ export function runMonteCarloForCase(
   doseTo: DoseQuantity,
 ): McRunOutput {
   const calibration = monteCarloCalibration(parts.case, parts.waterData);
-  return runMonteCarlo(parts.case, monteCarloRunOptions(calibration, { ...mc, doseTo }), parts.grid);
+  return runMonteCarlo(
+    parts.case,
+    monteCarloRunOptions(calibration, { ...mc, doseTo }),
+    parts.grid,
+  );
 }
 
 /** The Monte Carlo block asked of a case: a run, the reason it is not there, or nothing. */
