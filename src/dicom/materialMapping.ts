@@ -48,7 +48,7 @@ export function materialForRhoE(
   }
   const materialId: MaterialId = diff <= toleranceRhoE ? best : 'custom';
   const raw = densityForRhoE(materialId, rhoE);
-  const min = 0.001;
+  const min = LIMITS.minDensityGPerCm3;
   const max = LIMITS.maxDensityGPerCm3;
   const clamped = raw < min || raw > max;
   const density = Math.round(Math.min(max, Math.max(min, raw)) * 1000) / 1000;

@@ -41,8 +41,7 @@ export const RULES = {
   density: (n: number): NumberRule => ({
     name: `Layer ${n} density`,
     unit: 'g/cm³',
-    min: 0,
-    minExclusive: true,
+    min: LIMITS.minDensityGPerCm3,
     max: LIMITS.maxDensityGPerCm3,
   }),
   distance: (what: 'SSD' | 'SAD'): NumberRule => ({

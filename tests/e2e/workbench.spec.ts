@@ -58,7 +58,7 @@ test('builds a three-layer lung case by hand, saves it, and finds it restored af
   await page.getByTestId('layer-3-thickness').fill('10');
   // A typed value that breaks a rule stays in the field, with a message naming the field.
   await page.getByTestId('layer-3-density').fill('-1');
-  await expect(page.getByText('Layer 3 density: must be > 0 g/cm³')).toBeVisible();
+  await expect(page.getByText('Layer 3 density: must be ≥ 0.001 g/cm³')).toBeVisible();
   await expect(page.getByTestId('layer-3-density')).toHaveValue('-1');
   await page.getByTestId('layer-3-density').fill('');
   // An SAD set-up marks the isocentre on the slab strip.
