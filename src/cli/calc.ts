@@ -4,24 +4,18 @@ import { describeProblems } from '../io/caseFile';
 import { PLAN_FORMAT } from '../io/planSchema';
 import { parseArgs } from './args';
 import { runBatch, runJsonLines } from './batch';
-import {
-  calculateDocument,
-  jsonOf,
-  loadDocument,
-  planOptionsOf,
-  textOf,
-  waterSourceOf,
-  WATER_DATA_USAGE,
-  type CliCalc,
-} from './checkCommand';
-import { tableNoteLines, WATER_TABLE_USAGE, waterTableFromFlags } from './waterTableArgs';
+import { calculateDocument, jsonOf, loadDocument, textOf, WATER_DATA_USAGE } from './checkCommand';
+import { cliCalcOf } from './cliCalc';
+import { WATER_TABLE_USAGE } from './waterTableArgs';
 import { commandLineProblems, flagProblemsForDocument } from './flagRules';
 import { readTextFileNoting } from './readTextFile';
-import { MC_USAGE, mcOptionsOf } from './mcArgs';
+import { MC_USAGE } from './mcArgs';
+import { DICOM_USAGE, runDicomCommand } from './dicomCommand';
 
 const USAGE = `Usage: npm run calc -- <case.json | plan.json> [--json] [--methods id,id,...]
        npm run calc -- --batch <file> <file> ...   (one summary row per file; exit 1 if any check fails or is uncertain)
        npm run calc -- --jsonl <file> <file> ...   (each file's full JSON document on one line)
+       npm run calc -- --dicom DIR [--json] [--write-plan out.json]   (CT + RT Plan: prints lamina.plancalc)
   --json          print one JSON document (format "lamina.calc" with a "check" section; a plan
                   file prints "lamina.plancalc")
   --jsonl         one line per file: {"file", "document"} (the --json document) or {"file", "problems"}
@@ -33,7 +27,8 @@ const USAGE = `Usage: npm run calc -- <case.json | plan.json> [--json] [--method
   --dose-to water|medium  dose convention of every method (default: the file's, else water)
 ${WATER_DATA_USAGE}
 ${WATER_TABLE_USAGE}
-${MC_USAGE}`;
+${MC_USAGE}
+${DICOM_USAGE}`;
 
 function main(argv: string[]): number {
   let args;
@@ -52,25 +47,14 @@ function main(argv: string[]): number {
     console.error(`${flagProblems.join('\n')}\n${USAGE}`);
     return 2;
   }
-  const table = waterTableFromFlags(args.flags);
-  if (table && !table.ok) {
-    console.error(`invalid water data\n${table.problems.join('\n')}`);
+  const made = cliCalcOf(args.flags);
+  if (!made.ok) {
+    if (made.kind === 'water') console.error(`invalid water data\n${made.problems.join('\n')}`);
+    else console.error(`${made.problems.join('\n')}\n${USAGE}`);
     return 2;
   }
-  for (const line of tableNoteLines(table)) console.error(line);
-  let calc: CliCalc;
-  try {
-    calc = {
-      water: waterSourceOf(
-        args.flags,
-        table?.ok && table.input ? { kind: 'table', table: table.input } : undefined,
-      ),
-      options: { ...planOptionsOf(args.flags), ...mcOptionsOf(args.flags) },
-    };
-  } catch (e) {
-    console.error(`${(e as Error).message}\n${USAGE}`);
-    return 2;
-  }
+  for (const line of made.notes) console.error(line);
+  const calc = made.calc;
   const json = args.flags.get('json') === true;
   if (args.flags.get('jsonl') === true) return runJsonLines(args.files, calc);
   if (args.flags.get('batch') === true || args.files.length > 1)
@@ -101,4 +85,6 @@ function main(argv: string[]): number {
   return 0;
 }
 
-process.exitCode = main(process.argv.slice(2));
+if (process.argv.some((a) => a === '--dicom' || a.startsWith('--dicom=')))
+  void runDicomCommand(process.argv.slice(2), USAGE).then((code) => (process.exitCode = code));
+else process.exitCode = main(process.argv.slice(2));

@@ -8,6 +8,7 @@ import type { ParsedDocument } from './checkCommand';
 import { BOOLEAN_FLAGS, type ParsedArgs } from './args';
 import { MC_FLAGS, mcFlagProblems } from './mcArgs';
 import { WATER_TABLE_FLAGS } from './waterTableArgs';
+import { DICOM_FLAG, DICOM_ONLY_FLAGS } from './dicomFlags';
 
 /** Flags of the calc command that take a value. */
 export const CALC_VALUE_FLAGS = [
@@ -24,6 +25,8 @@ export const KNOWN_FLAGS: ReadonlySet<string> = new Set<string>([
   ...CALC_VALUE_FLAGS,
   ...WATER_TABLE_FLAGS,
   ...MC_FLAGS,
+  DICOM_FLAG,
+  ...DICOM_ONLY_FLAGS,
 ]);
 
 /** Problems with the flags as given, independent of the files; empty when all is well. */
@@ -40,6 +43,9 @@ export function commandLineProblems(args: ParsedArgs): string[] {
       problems.push(`--${name}: needs a value (given empty)`);
   }
   if (problems.length > 0) return problems;
+  if (!args.flags.has(DICOM_FLAG))
+    for (const name of DICOM_ONLY_FLAGS)
+      if (args.flags.has(name)) problems.push(`--${name}: only with --dicom DIR`);
   problems.push(...mcFlagProblems(args.flags));
   const method = args.flags.get('check-method');
   if (typeof method === 'string') {

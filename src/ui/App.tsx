@@ -27,6 +27,7 @@ const TABS: { id: ViewTab; label: string }[] = [
   { id: 'plane', label: 'Dose plane' },
   { id: 'mc', label: 'Monte Carlo run' },
   { id: 'check', label: 'Point check & report' },
+  { id: 'dicom', label: 'Patient import (DICOM)' },
 ];
 
 function ThemeToggle() {
@@ -200,6 +201,13 @@ function Workbench() {
             which="check"
             title="Point check & report"
             pending="The point-dose / MU check and its printable record appear here once that panel is in."
+          />
+        ) : null}
+        {tab === 'dicom' ? (
+          <MountPoint
+            which="dicom"
+            title="Patient import (DICOM)"
+            pending="Import of a CT series and RT Plan appears here once that panel is in."
           />
         ) : null}
       </div>

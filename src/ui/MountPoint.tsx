@@ -8,6 +8,7 @@ const modules = import.meta.glob<PanelModule>([
   './check/CheckPanel.tsx',
   './plane/DosePlanePanel.tsx',
   './montecarlo/MonteCarloPanel.tsx',
+  './dicom/DicomImportPanel.tsx',
 ]);
 
 function lazyPanel(path: string, exportName: string): ComponentType | null {
@@ -24,6 +25,7 @@ const PANELS = {
   check: lazyPanel('./check/CheckPanel.tsx', 'CheckPanel'),
   plane: lazyPanel('./plane/DosePlanePanel.tsx', 'DosePlanePanel'),
   mc: lazyPanel('./montecarlo/MonteCarloPanel.tsx', 'MonteCarloPanel'),
+  dicom: lazyPanel('./dicom/DicomImportPanel.tsx', 'DicomImportPanel'),
 } as const;
 
 export function MountPoint({

@@ -63,6 +63,14 @@ describe('validateCase rejections name the field and the rule', () => {
     );
   });
 
+  it('density below 0.001 g/cm³ (a denormal 5e-324 gave an infinite lateral range)', () => {
+    expect(problemsOf(edit((c) => (c.layers[0].densityGPerCm3 = 5e-324)))).toContain(
+      'layers[0].densityGPerCm3: density must be ≥ 0.001 g/cm³',
+    );
+    // Air at its own density (0.0012 g/cm³, NIST) stays valid.
+    expect(validateCase(edit((c) => (c.layers[0].densityGPerCm3 = 0.0012))).ok).toBe(true);
+  });
+
   it('depth outside the phantom', () => {
     const p = problemsOf(edit((c) => (c.points[0].depthCm = 25)));
     expect(

@@ -27,6 +27,12 @@ describe('parseNumberField(...)', () => {
       ok: false,
       message: 'SSD: must be ≥ 50 cm',
     });
+    // The page's density rule is the case file's: from 0.001 g/cm³ (below air's 0.0012, NIST).
+    expect(parseNumberField('0.0001', RULES.density(3))).toEqual({
+      ok: false,
+      message: 'Layer 3 density: must be ≥ 0.001 g/cm³',
+    });
+    expect(parseNumberField('0.0012', RULES.density(3))).toEqual({ ok: true, value: 0.0012 });
   });
 
   it('formatField(...) drops binary noise and trailing zeros', () => {
