@@ -1,7 +1,8 @@
 // Condensed-history transport of one electron or positron (class I): CSDA steps limited by a
-// fractional energy loss, by a maximum length and at every boundary; collision loss deposited
-// along the step (at its midpoint), radiative loss banked and emitted at the end of the track as
-// one bremsstrahlung photon from the track's start along its initial direction (opened by
+// fractional energy loss, by a maximum mass thickness (g/cm², see TransportOptions) and at every
+// boundary; collision loss deposited along each straight leg (spread over it when the scorer can,
+// else at its midpoint), radiative loss banked and emitted at the end of the track as one
+// bremsstrahlung photon from the track's start along its initial direction (opened by
 // θ = m_ec²/E); multiple scattering by Highland's formula (PDG form) at a random hinge point of
 // each step; positrons annihilate at rest into two 0.511 MeV photons, back to back, isotropic.
 import { ELECTRON_REST_ENERGY_MEV } from '../units';
@@ -27,7 +28,7 @@ export interface ElectronContext {
   readonly x0Cm: Float64Array;
   readonly eCut: number;
   readonly fLoss: number;
-  readonly maxStep: number;
+  readonly maxStepCm: Float64Array;
   readonly dir: Direction;
   localDeposit(x: number, y: number, z: number, region: number, e: number, primary: boolean): void;
 }
@@ -55,6 +56,7 @@ export function transportElectron(
     r0 = region,
     t0 = t;
   const d = ctx.dir;
+  const alongLeg = ctx.scorer.depositAlong !== undefined;
   let bank = 0;
   let escaped = false;
   while (t > ctx.eCut) {
@@ -65,8 +67,9 @@ export function transportElectron(
     const sTot = atGrid(tables.totalMeVCm2PerG, mid) * rho;
     const fCol = atGrid(tables.collisionFraction, mid);
     let step = dE / sTot;
-    if (step > ctx.maxStep) {
-      step = ctx.maxStep;
+    const maxStep = ctx.maxStepCm[region] as number;
+    if (step > maxStep) {
+      step = maxStep;
       dE = step * sTot;
     }
     const hinge = rng.next() * step;
@@ -79,14 +82,16 @@ export function transportElectron(
       const lost = (dE * go) / step;
       const col = lost * fCol;
       ctx.tally.depositedMeV += col;
-      ctx.scorer.deposit(
-        x + 0.5 * go * u,
-        y + 0.5 * go * v,
-        z + 0.5 * go * w,
-        region,
-        col,
-        primary,
-      );
+      if (alongLeg) ctx.scorer.depositAlong!(x, y, z, u, v, w, go, region, col, primary);
+      else
+        ctx.scorer.deposit(
+          x + 0.5 * go * u,
+          y + 0.5 * go * v,
+          z + 0.5 * go * w,
+          region,
+          col,
+          primary,
+        );
       bank += lost - col;
       t -= lost;
       x += u * go;

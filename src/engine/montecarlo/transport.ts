@@ -41,7 +41,8 @@ export class Transport implements ElectronContext {
   readonly eCut: number;
   private readonly gCut: number;
   readonly fLoss: number;
-  readonly maxStep: number;
+  /** Maximum electron step in each region (cm): the mass-thickness limit over the density. */
+  readonly maxStepCm: Float64Array;
   private readonly compton: ComptonSample = { scatteredMeV: 0, cosTheta: 1 };
   readonly dir: Direction = { u: 0, v: 0, w: 1 };
 
@@ -60,7 +61,8 @@ export class Transport implements ElectronContext {
     this.eCut = options.electronCutoffMeV ?? 0.189;
     this.gCut = options.photonCutoffMeV ?? 0.01;
     this.fLoss = options.maxEnergyLossFraction ?? 0.08;
-    this.maxStep = options.maxStepCm ?? 0.25;
+    const maxStepGPerCm2 = options.maxStepGPerCm2 ?? 0.25;
+    this.maxStepCm = this.density.map((rho) => maxStepGPerCm2 / rho);
   }
 
   /** Transports one incident photon (and everything it sets in motion) to the end. */

@@ -10,6 +10,23 @@ export interface McScorer {
     energyMeV: number,
     primary: boolean,
   ): void;
+  /**
+   * Optional: energy lost uniformly along a straight electron leg from (x, y, z) in direction
+   * (u, v, w), `lengthCm` long (continuous slowing down). Without it the leg's energy goes to
+   * deposit() at the leg's midpoint.
+   */
+  depositAlong?(
+    x: number,
+    y: number,
+    z: number,
+    u: number,
+    v: number,
+    w: number,
+    lengthCm: number,
+    region: number,
+    energyMeV: number,
+    primary: boolean,
+  ): void;
   /** Optional: a particle leaving the geometry (`uncollided` for photons that never interacted). */
   escape?(kind: number, energyMeV: number, z: number, w: number, uncollided: boolean): void;
 }
@@ -21,8 +38,13 @@ export interface TransportOptions {
   photonCutoffMeV?: number;
   /** Maximum fractional energy loss per electron step; default 0.08. */
   maxEnergyLossFraction?: number;
-  /** Maximum electron step (cm); default 0.25. */
-  maxStepCm?: number;
+  /**
+   * Maximum electron step as mass thickness (g/cm²); default 0.25, i.e. 0.25 cm in water, one
+   * depth bin, and 0.96 cm in lung at 0.26 g/cm³. In mass terms because the multiple-scattering
+   * angle of a step depends on its length over the radiation length (s/X₀, X₀ ∝ 1/ρ) and the
+   * energy lost on it on s·ρ: every medium then gets steps of the same angular and energy size.
+   */
+  maxStepGPerCm2?: number;
 }
 
 /** Energy book of a run (MeV): deposited + escaped + belowCutoff = incident. */
