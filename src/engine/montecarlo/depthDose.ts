@@ -23,24 +23,21 @@ export interface McDepthDose {
 }
 
 /**
- * Dose per fluence Φ₁₀₀ (photons/cm² at 100 cm; at the surface for a parallel beam): D = E/(m/A) × (100/(SSD + z))², with E the
- * energy per history in the bin's aperture column and m/A its mass per area (exact across
- * interfaces). With `toWater`, dose to medium is converted by the water/medium collision
- * stopping-power ratio at `electronEnergyMeV` (Siebers et al., PMB 45, 983 (2000), with one
- * representative electron energy instead of the full spectrum).
+ * Dose per fluence Φ₁₀₀ (photons/cm² at 100 cm; at the surface for a parallel beam) per unit of
+ * energy per history in each bin: D = E/(m/A) × (100/(SSD + z))², with E the energy per history in
+ * the bin's aperture column and m/A its mass per area (exact across interfaces), in Gy·cm² per
+ * MeV. With `toWater`, dose to medium is converted by the water/medium collision stopping-power
+ * ratio at `electronEnergyMeV` (Siebers et al., PMB 45, 983 (2000), with one representative
+ * electron energy instead of the full spectrum).
  */
-export function depthDoseFromStatistics(
+export function binDoseFactors(
   scenario: McScenario,
   grid: ScoringGrid,
-  stats: BinStatistics,
   toWater?: { electronEnergyMeV: number },
-): McDepthDose {
+): Float64Array {
   const phantom = makeSlabPhantom(scenario.layers);
   const dz = grid.depthBinCm;
-  const edges: number[] = [];
-  const dose: number[] = [];
-  const sigma: number[] = [];
-  for (let i = 0; i <= grid.nDepth; i++) edges.push(i * dz);
+  const factors = new Float64Array(grid.nDepth);
   for (let i = 0; i < grid.nDepth; i++) {
     const top = i * dz;
     const bottom = Math.min(phantom.totalThicknessCm, (i + 1) * dz);
@@ -57,8 +54,26 @@ export function depthDoseFromStatistics(
       factor *=
         collisionStoppingPowerMeVCm2PerG('water', t) / collisionStoppingPowerMeVCm2PerG(id, t);
     }
-    dose.push((stats.mean[i] as number) * factor);
-    sigma.push((stats.sigma[i] as number) * factor);
+    factors[i] = factor;
+  }
+  return factors;
+}
+
+/** Dose per fluence and its 1σ per bin from the batch statistics of the deposits (see above). */
+export function depthDoseFromStatistics(
+  scenario: McScenario,
+  grid: ScoringGrid,
+  stats: BinStatistics,
+  toWater?: { electronEnergyMeV: number },
+): McDepthDose {
+  const factors = binDoseFactors(scenario, grid, toWater);
+  const edges: number[] = [];
+  const dose: number[] = [];
+  const sigma: number[] = [];
+  for (let i = 0; i <= grid.nDepth; i++) edges.push(i * grid.depthBinCm);
+  for (let i = 0; i < grid.nDepth; i++) {
+    dose.push((stats.mean[i] as number) * (factors[i] as number));
+    sigma.push((stats.sigma[i] as number) * (factors[i] as number));
   }
   return { edgesCm: edges, dosePerFluenceGyCm2: dose, sigmaGyCm2: sigma };
 }
