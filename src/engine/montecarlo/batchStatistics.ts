@@ -95,12 +95,19 @@ export class BatchAccumulator {
 
   /** Summed energy book of the completed batches. */
   energy(): EnergyTally {
-    const e: EnergyTally = { incidentMeV: 0, depositedMeV: 0, escapedMeV: 0, belowCutoffMeV: 0 };
+    const e: EnergyTally = {
+      incidentMeV: 0,
+      depositedMeV: 0,
+      escapedMeV: 0,
+      belowCutoffMeV: 0,
+      weightNetMeV: 0,
+    };
     for (const t of this.done()) {
       e.incidentMeV += t.energy.incidentMeV;
       e.depositedMeV += t.energy.depositedMeV;
       e.escapedMeV += t.energy.escapedMeV;
       e.belowCutoffMeV += t.energy.belowCutoffMeV;
+      e.weightNetMeV += t.energy.weightNetMeV;
     }
     return e;
   }

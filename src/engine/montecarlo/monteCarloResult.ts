@@ -135,6 +135,7 @@ export function finalizeMonteCarlo(
       `dose/MU calibrated by a water run 10 × 10 cm², SSD 100, d_max ${max.depthCm.toFixed(2)} cm = ${refRate} cGy/MU`,
       `S_c = ${sc}`,
       `${histories} histories in ${acc.completed} of ${plan.batches} batches, seed ${plan.seed}`,
+      varianceNote(plan),
       spectrum.approximate ? 'spectrum approximate (derived stand-in)' : 'published spectrum',
     ].join('; '),
     methodClass: 'type C',
@@ -178,6 +179,13 @@ export function finalizeMonteCarlo(
     plane: planeOf(grid, acc.lateralMean(), phantom, caseScenario.ssdCm, muPerFluence),
     energyBalance: acc.energy(),
   };
+}
+
+/** How the run reduced its variance (stated with every result). */
+function varianceNote(plan: McPlan): string {
+  const vr = plan.variance[plan.roles.case];
+  if (!vr) return 'analogue transport (no variance reduction)';
+  return `variance reduction (unbiased): first interaction of the incident photons forced into the depths feeding the points and the calibration window, Russian roulette (survival 1/${Math.round(1 / vr.survival)}) of electrons and positrons that cannot reach them; the curve away from the points is noisier`;
 }
 
 /** Box filter of the lateral deposit histogram by the field width at each depth (see depthDoseScorer). */

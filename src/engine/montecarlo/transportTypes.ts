@@ -1,6 +1,9 @@
 // Types shared by the photon and electron transport and the scorers.
 
-/** Receives energy deposits (MeV) at a point; `primary` marks first-interaction charged particles. */
+/**
+ * Receives energy deposits (MeV, times the particle's statistical weight) at a point; `primary`
+ * marks first-interaction charged particles.
+ */
 export interface McScorer {
   deposit(
     x: number,
@@ -47,10 +50,16 @@ export interface TransportOptions {
   maxStepGPerCm2?: number;
 }
 
-/** Energy book of a run (MeV): deposited + escaped + belowCutoff = incident. */
+/**
+ * Energy book of a run (MeV, weighted): deposited + escaped + belowCutoff = incident + weightNet
+ * exactly. weightNet is what variance reduction added (roulette survivors' extra weight, forced
+ * interactions) minus what it took away (ended particles, weight a photon lost by crossing a
+ * forcing zone uncollided); its expectation is 0, and it is 0 in analogue transport.
+ */
 export interface EnergyTally {
   incidentMeV: number;
   depositedMeV: number;
   escapedMeV: number;
   belowCutoffMeV: number;
+  weightNetMeV: number;
 }

@@ -128,6 +128,7 @@ describe('statistics and binned curves', () => {
         depositedMeV: 0,
         escapedMeV: 0,
         belowCutoffMeV: 0,
+        weightNetMeV: 0,
       },
       elapsedMs: 0,
     });
