@@ -27,6 +27,11 @@ export const LIMITS = {
    * rounding (1e-323 cm gave a non-finite superposition curve).
    */
   minLayerThicknessCm: 0.001,
+  /**
+   * Lowest density (g/cm³): about the density of air (0.0012) at 1 km altitude, below any tissue,
+   * cavity gas or lung; a denormal density (5e-324) gave an infinite lateral electron range.
+   */
+  minDensityGPerCm3: 0.001,
 } as const;
 
 const finite = (what: string) =>
@@ -48,6 +53,10 @@ export const layerSchema = z.strictObject({
     ),
   densityGPerCm3: finite('density')
     .refine((v) => v > 0, 'density must be > 0 g/cm³')
+    .refine(
+      (v) => v <= 0 || v >= LIMITS.minDensityGPerCm3,
+      `density must be ≥ ${LIMITS.minDensityGPerCm3} g/cm³`,
+    )
     .refine(
       (v) => v <= LIMITS.maxDensityGPerCm3,
       `density must be ≤ ${LIMITS.maxDensityGPerCm3} g/cm³`,
