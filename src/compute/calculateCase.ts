@@ -29,15 +29,30 @@ import {
   type McRunOutput,
 } from './monteCarloCalibration';
 import { runMonteCarlo } from '../engine/montecarlo/runMonteCarlo';
+import type { McCaseInput, McOptions } from '../engine/montecarlo/monteCarloPlan';
+import type { McResult } from '../engine/montecarlo/monteCarloResult';
 import { convertMethodDose } from '../engine/dose/doseConversion';
 import { doseQuantityLabel as doseToLabel, type DoseQuantity } from '../engine/dose/doseQuantity';
 import { resolveDoseTo } from './doseConvention';
 
 export { CALC_FORMAT, CALC_VERSION, CAUTIONS, type CalcReport };
 
+/** Runs a whole Monte Carlo case; any runner gives the result of runMonteCarlo for the same inputs. */
+export type McRunner = (
+  c: McCaseInput,
+  options: McOptions,
+  depthGridCm: readonly number[],
+) => McResult;
+
 export interface McCalcOptions {
   histories: number;
   seed: number;
+  /**
+   * Who runs the batches (default: runMonteCarlo, in this thread). In-process callers only: the
+   * command line passes its threaded runner (src/cli/mcThreads.ts); the page runs its Monte Carlo
+   * in the worker pool (mcPool.ts) and never sends one.
+   */
+  runner?: McRunner;
 }
 
 export interface CalcOptions {
@@ -192,8 +207,8 @@ export function assembleReport(
 }
 
 /**
- * Run the Monte Carlo of a case in this thread (CLI, tests), calibrated for its water data, in
- * the dose convention `doseTo`.
+ * Run the Monte Carlo of a case in this process (CLI, tests: in this thread, or on the runner's
+ * threads), calibrated for its water data, in the dose convention `doseTo`.
  */
 export function runMonteCarloForCase(
   parts: CaseParts,
@@ -201,9 +216,10 @@ export function runMonteCarloForCase(
   doseTo: DoseQuantity,
 ): McRunOutput {
   const calibration = monteCarloCalibration(parts.case, parts.waterData);
-  return runMonteCarlo(
+  const run = mc.runner ?? runMonteCarlo;
+  return run(
     parts.case,
-    monteCarloRunOptions(calibration, { ...mc, doseTo }),
+    monteCarloRunOptions(calibration, { histories: mc.histories, seed: mc.seed, doseTo }),
     parts.grid,
   );
 }

@@ -46,6 +46,7 @@ function referenceKey(plan: McPlan): string {
     plan.historiesPerBatch,
     plan.binning,
     plan.options.transport ?? null,
+    plan.variance[plan.roles.reference] ?? null,
   ]);
 }
 

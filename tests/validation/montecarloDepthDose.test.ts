@@ -87,9 +87,8 @@ describe('Monte Carlo water depth dose (typical published beams, from memory)', 
 
   it("O'Connor's theorem: water composition at 0.25 g/cm³, field 10 at depth 20 gives the dose of water, field 2.5 at depth 5 (3σ)", () => {
     // O'Connor (1957) density scaling: D_ρ(d, s) = D_w(ρd, ρs) for the same fluence (parallel
-    // beam). Independent seeds; steps limited by energy loss only, so both runs use the same
-    // mass-thickness steps.
-    const transport = { maxStepCm: 100 };
+    // beam). Independent seeds; the step limits (energy-loss fraction, maximum in g/cm²) are in
+    // mass terms, so both runs take the same mass-thickness steps.
     const light = simulate(
       {
         energy: '6MV',
@@ -103,7 +102,6 @@ describe('Monte Carlo water depth dose (typical published beams, from memory)', 
       6000,
       11,
       { depthBinCm: 1, lateralBinCm: 1, lateralMarginCm: 1 },
-      transport,
     );
     const dense = simulate(
       {
@@ -118,12 +116,44 @@ describe('Monte Carlo water depth dose (typical published beams, from memory)', 
       6000,
       12,
       { depthBinCm: 0.25, lateralBinCm: 0.25, lateralMarginCm: 0.25 },
-      transport,
     );
     const a = windowMean(light, 18, 22);
     const b = windowMean(dense, 4.5, 5.5);
     expect(a.sigma / a.mean).toBeLessThan(0.03);
     expect(Math.abs(a.mean - b.mean)).toBeLessThanOrEqual(3 * Math.hypot(a.sigma, b.sigma));
+  });
+
+  it("O'Connor scaling holds history by history: with the same seed, water at 0.25 g/cm³ (field 8, bins 1 cm) scores what water does (field 2, bins 0.25 cm), to rounding", () => {
+    // Derived: with every step limit in mass terms, each length of the light run is 4× that of
+    // the dense one (a power of two: exact in binary floating point) and every random number is
+    // used for the same decision, so the two runs are the same histories scaled. A step limit in
+    // cm (0.25 cm in both media) breaks this: in the light medium it allows only 0.0625 g/cm².
+    const scenario = (fieldCm: number, layers: McScenario['layers']): McScenario => ({
+      energy: '6MV',
+      ssdCm: 100,
+      fieldXCm: fieldCm,
+      fieldYCm: fieldCm,
+      parallel: true,
+      layers,
+    });
+    const light = simulate(
+      scenario(8, [{ materialId: 'custom', thicknessCm: 40, densityGPerCm3: 0.25 }]),
+      2,
+      300,
+      5,
+      { depthBinCm: 1, lateralBinCm: 1, lateralMarginCm: 1 },
+    );
+    const dense = simulate(scenario(2, water(10)), 2, 300, 5, {
+      depthBinCm: 0.25,
+      lateralBinCm: 0.25,
+      lateralMarginCm: 0.25,
+    });
+    expect(light.dosePerFluenceGyCm2).toHaveLength(40);
+    light.dosePerFluenceGyCm2.forEach((d, i) => {
+      const w = dense.dosePerFluenceGyCm2[i] as number;
+      expect(Math.abs(d - w)).toBeLessThanOrEqual(1e-9 * Math.abs(w));
+    });
+    expect(Math.max(...dense.dosePerFluenceGyCm2)).toBeGreaterThan(0);
   });
 });
 

@@ -67,13 +67,23 @@ export function decidingDifferenceOf(check: CheckCore): DecidingDifference | nul
       add('total-dose', null, t.pointId, m.diffPercent, m.sigma?.diffPercent, t.tolerancePercent);
   }
   let best: DecidingDifference | null = null;
+  let bestRatio = 0;
   for (const c of candidates) {
     if (c.verdict !== check.verdict) continue;
     const r = Math.abs(c.percent) / c.tolerancePercent;
-    if (best === null || r > Math.abs(best.percent) / best.tolerancePercent) best = c;
+    // Ratios within rounding of each other are a tie, kept by the first in beam and point order:
+    // the page's engine (Chromium) and the CLI's (Node) may differ in the last bits of the same
+    // number, and must still name the same beam and point.
+    if (best === null || r > bestRatio * (1 + TIE_RELATIVE)) {
+      best = c;
+      bestRatio = r;
+    }
   }
   return best;
 }
+
+/** Relative difference below which two |Δ|/tolerance ratios count as equal (rounding only). */
+export const TIE_RELATIVE = 1e-9;
 
 /** The deciding method's missing numbers at every beam and point where it compared nothing. */
 export function missingOfDecisive(check: CheckCore): MissingAt[] {

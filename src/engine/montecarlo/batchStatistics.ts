@@ -64,6 +64,20 @@ export class BatchAccumulator {
     return { mean: s.mean[0] as number, sigma: s.sigma[0] as number };
   }
 
+  /**
+   * Mean and batch standard error of a·(deposit per history in bin i) + b·(same in bin j): a
+   * reading between two bins, with their correlation counted. O(batches).
+   */
+  caxPairStatistics(i: number, a: number, j: number, b: number): { mean: number; sigma: number } {
+    const s = statistics(
+      this.done().map((t) => ({
+        values: Float64Array.of(a * (t.caxMeV[i] as number) + b * (t.caxMeV[j] as number)),
+        histories: t.histories,
+      })),
+    );
+    return { mean: s.mean[0] as number, sigma: s.sigma[0] as number };
+  }
+
   /** Mean per history of the lateral histogram (no uncertainty). */
   lateralMean(): Float64Array {
     const done = this.done();
@@ -82,12 +96,19 @@ export class BatchAccumulator {
 
   /** Summed energy book of the completed batches. */
   energy(): EnergyTally {
-    const e: EnergyTally = { incidentMeV: 0, depositedMeV: 0, escapedMeV: 0, belowCutoffMeV: 0 };
+    const e: EnergyTally = {
+      incidentMeV: 0,
+      depositedMeV: 0,
+      escapedMeV: 0,
+      belowCutoffMeV: 0,
+      weightNetMeV: 0,
+    };
     for (const t of this.done()) {
       e.incidentMeV += t.energy.incidentMeV;
       e.depositedMeV += t.energy.depositedMeV;
       e.escapedMeV += t.energy.escapedMeV;
       e.belowCutoffMeV += t.energy.belowCutoffMeV;
+      e.weightNetMeV += t.energy.weightNetMeV;
     }
     return e;
   }

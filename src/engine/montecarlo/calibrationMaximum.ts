@@ -21,10 +21,13 @@ export interface CalibrationMaximum {
 const MIN_BINS = 5;
 
 /**
- * Window of the fit: from 0.6 × to 1.6 × the nominal d_max (the build-up side is steeper), widened
- * symmetrically to at least MIN_BINS bins.
+ * Window of the fit (first and last bin): from 0.6 × to 1.6 × the nominal d_max (the build-up side
+ * is steeper), widened symmetrically to at least MIN_BINS bins. Fixed before any score is seen.
  */
-function windowOf(centres: readonly number[], nominalCm: number): [number, number] {
+export function calibrationWindowBins(
+  centres: readonly number[],
+  nominalCm: number,
+): [number, number] {
   let lo = centres.findIndex((x) => x >= 0.6 * nominalCm);
   if (lo < 0) lo = Math.max(0, centres.length - MIN_BINS);
   let hi = lo;
@@ -57,7 +60,7 @@ export function calibrationMaximum(dd: McDepthDose, nominalDMaxCm: number): Cali
   const centres = dd.dosePerFluenceGyCm2.map(
     (_, i) => ((e[i] as number) + (e[i + 1] as number)) / 2,
   );
-  const [lo, hi] = windowOf(centres, nominalDMaxCm);
+  const [lo, hi] = calibrationWindowBins(centres, nominalDMaxCm);
   const s = [0, 0, 0, 0, 0];
   const r = [0, 0, 0];
   for (let i = lo; i <= hi; i++) {

@@ -17,21 +17,16 @@ export interface McDepthDose {
 }
 
 /**
- * Dose per fluence Φ₁₀₀ (photons/cm² at 100 cm; at the surface for a parallel beam): D = E/(m/A) × (100/(SSD + z))², with E the
- * energy per history in the bin's aperture column and m/A its mass per area (exact across
- * interfaces): dose to medium. Dose to water is converted from it by dose/doseConversion.ts.
+/**
+ * Dose per fluence Φ₁₀₀ (photons/cm² at 100 cm; at the surface for a parallel beam) per unit of
+ * energy per history in each bin: D = E/(m/A) × (100/(SSD + z))², with E the energy per history in
+ * the bin's aperture column and m/A its mass per area (exact across interfaces), in Gy·cm² per
+ * MeV: dose to medium. Dose to water is converted from it by dose/doseConversion.ts.
  */
-export function depthDoseFromStatistics(
-  scenario: McScenario,
-  grid: ScoringGrid,
-  stats: BinStatistics,
-): McDepthDose {
+export function binDoseFactors(scenario: McScenario, grid: ScoringGrid): Float64Array {
   const phantom = makeSlabPhantom(scenario.layers);
   const dz = grid.depthBinCm;
-  const edges: number[] = [];
-  const dose: number[] = [];
-  const sigma: number[] = [];
-  for (let i = 0; i <= grid.nDepth; i++) edges.push(i * dz);
+  const factors = new Float64Array(grid.nDepth);
   for (let i = 0; i < grid.nDepth; i++) {
     const top = i * dz;
     const bottom = Math.min(phantom.totalThicknessCm, (i + 1) * dz);
@@ -40,9 +35,25 @@ export function depthDoseFromStatistics(
       cumulativeMassThicknessGPerCm2(phantom, top);
     const zc = (i + 0.5) * dz;
     const isq = scenario.parallel ? 1 : (FIELD_DEFINITION_DISTANCE_CM / (scenario.ssdCm + zc)) ** 2;
-    const factor = (GRAY_PER_MEV_PER_G * isq) / massPerArea;
-    dose.push((stats.mean[i] as number) * factor);
-    sigma.push((stats.sigma[i] as number) * factor);
+    factors[i] = (GRAY_PER_MEV_PER_G * isq) / massPerArea;
+  }
+  return factors;
+}
+
+/** Dose per fluence (dose to medium) and its 1σ per bin from the batch statistics of the deposits (see above). */
+export function depthDoseFromStatistics(
+  scenario: McScenario,
+  grid: ScoringGrid,
+  stats: BinStatistics,
+): McDepthDose {
+  const factors = binDoseFactors(scenario, grid);
+  const edges: number[] = [];
+  const dose: number[] = [];
+  const sigma: number[] = [];
+  for (let i = 0; i <= grid.nDepth; i++) edges.push(i * grid.depthBinCm);
+  for (let i = 0; i < grid.nDepth; i++) {
+    dose.push((stats.mean[i] as number) * (factors[i] as number));
+    sigma.push((stats.sigma[i] as number) * (factors[i] as number));
   }
   return { edgesCm: edges, dosePerFluenceGyCm2: dose, sigmaGyCm2: sigma };
 }

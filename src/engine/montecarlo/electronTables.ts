@@ -21,6 +21,12 @@ export interface ElectronTables {
   totalMeVCm2PerG: Float64Array;
   /** Collision share S_col/S_tot of the energy lost. */
   collisionFraction: Float64Array;
+  /**
+   * CSDA range R(T) = ∫₀ᵀ dE / S_tot (g/cm²): log-trapezoid on the grid, with R(T_min) = T_min /
+   * S_tot(T_min) below it (a bound: S rises towards low energy). The path a transported electron
+   * can still travel, since its steps lose energy continuously at S_tot.
+   */
+  csdaRangeGPerCm2: Float64Array;
 }
 
 const cache = new Map<MaterialId, ElectronTables>();
@@ -37,7 +43,20 @@ export function electronTablesOf(id: MaterialId): ElectronTables {
     total[i] = col + rad;
     fraction[i] = col / (col + rad);
   }
-  const tables = { materialId: id, totalMeVCm2PerG: total, collisionFraction: fraction };
+  const range = new Float64Array(GRID_POINTS);
+  range[0] = ELECTRON_GRID_MIN_MEV / (total[0] as number);
+  for (let i = 1; i < GRID_POINTS; i++) {
+    // dE = T d(ln T): trapezoid of T / S_tot over the log grid.
+    const a = Math.exp(LOG_MIN + (i - 1) * LOG_STEP) / (total[i - 1] as number);
+    const b = Math.exp(LOG_MIN + i * LOG_STEP) / (total[i] as number);
+    range[i] = (range[i - 1] as number) + 0.5 * (a + b) * LOG_STEP;
+  }
+  const tables = {
+    materialId: id,
+    totalMeVCm2PerG: total,
+    collisionFraction: fraction,
+    csdaRangeGPerCm2: range,
+  };
   cache.set(id, tables);
   return tables;
 }

@@ -1,9 +1,12 @@
 // Condensed-history transport of one electron or positron (class I): CSDA steps limited by a
-// fractional energy loss, by a maximum length and at every boundary; collision loss deposited
-// along the step (at its midpoint), radiative loss banked and emitted at the end of the track as
-// one bremsstrahlung photon from the track's start along its initial direction (opened by
-// θ = m_ec²/E); multiple scattering by Highland's formula (PDG form) at a random hinge point of
-// each step; positrons annihilate at rest into two 0.511 MeV photons, back to back, isotropic.
+// fractional energy loss, by a maximum mass thickness (g/cm², see TransportOptions) and at every
+// boundary; collision loss deposited along each straight leg (spread over it when the scorer can,
+// else at its midpoint), radiative loss banked and
+// emitted at the end of the track as one bremsstrahlung photon from the track's start along its
+// initial direction (opened by θ = m_ec²/E); multiple scattering by Highland's formula (PDG form)
+// at a random hinge point of each step; positrons annihilate at rest into two 0.511 MeV photons,
+// back to back, isotropic. A particle that cannot reach a zone of interest first meets the
+// roulette (chargedRoulette.ts), when the run uses one; scores carry the particle's weight.
 import { ELECTRON_REST_ENERGY_MEV } from '../units';
 import type { McGeometry } from './geometry';
 import { atGrid } from './photonCrossSections';
@@ -12,6 +15,7 @@ import { rotateDirection, type Direction } from './direction';
 import { ELECTRON, PHOTON, POSITRON, type ParticleStack } from './particleStack';
 import type { EnergyTally, McScorer } from './transportTypes';
 import type { Rng } from './rng';
+import type { ChargedRoulette } from './chargedRoulette';
 
 const M = ELECTRON_REST_ENERGY_MEV;
 const TWO_PI = 2 * Math.PI;
@@ -27,8 +31,9 @@ export interface ElectronContext {
   readonly x0Cm: Float64Array;
   readonly eCut: number;
   readonly fLoss: number;
-  readonly maxStep: number;
+  readonly maxStepCm: Float64Array;
   readonly dir: Direction;
+  readonly roulette: ChargedRoulette | undefined;
   localDeposit(x: number, y: number, z: number, region: number, e: number, primary: boolean): void;
 }
 
@@ -44,8 +49,21 @@ export function transportElectron(
   w: number,
   region: number,
   primary: boolean,
+  weight: number,
   rng: Rng,
 ): void {
+  const rr = ctx.roulette;
+  // A particle that already won a roulette (weight above 1) plays no more: weights stay ≤ 1/p.
+  if (rr && weight <= 1 && !rr.canReach(z, region, t)) {
+    // A positron's book includes the 2m_ec² its annihilation (or escape) gives back.
+    const carried = weight * (positron ? t + 2 * M : t);
+    if (rng.next() >= rr.survival) {
+      ctx.tally.weightNetMeV -= carried;
+      return;
+    }
+    ctx.tally.weightNetMeV += carried * (rr.weightGain - 1);
+    weight *= rr.weightGain;
+  }
   const x0 = x,
     y0 = y,
     z0 = z,
@@ -55,6 +73,7 @@ export function transportElectron(
     r0 = region,
     t0 = t;
   const d = ctx.dir;
+  const alongLeg = ctx.scorer.depositAlong !== undefined;
   let bank = 0;
   let escaped = false;
   while (t > ctx.eCut) {
@@ -65,8 +84,9 @@ export function transportElectron(
     const sTot = atGrid(tables.totalMeVCm2PerG, mid) * rho;
     const fCol = atGrid(tables.collisionFraction, mid);
     let step = dE / sTot;
-    if (step > ctx.maxStep) {
-      step = ctx.maxStep;
+    const maxStep = ctx.maxStepCm[region] as number;
+    if (step > maxStep) {
+      step = maxStep;
       dE = step * sTot;
     }
     const hinge = rng.next() * step;
@@ -77,17 +97,20 @@ export function transportElectron(
       const db = Math.max(0, ctx.geometry.distanceToBoundary(region, x, y, z, u, v, w));
       const go = db < len ? db : len;
       const lost = (dE * go) / step;
-      const col = lost * fCol;
+      const colUnweighted = lost * fCol;
+      const col = colUnweighted * weight;
       ctx.tally.depositedMeV += col;
-      ctx.scorer.deposit(
-        x + 0.5 * go * u,
-        y + 0.5 * go * v,
-        z + 0.5 * go * w,
-        region,
-        col,
-        primary,
-      );
-      bank += lost - col;
+      if (alongLeg) ctx.scorer.depositAlong!(x, y, z, u, v, w, go, region, col, primary);
+      else
+        ctx.scorer.deposit(
+          x + 0.5 * go * u,
+          y + 0.5 * go * v,
+          z + 0.5 * go * w,
+          region,
+          col,
+          primary,
+        );
+      bank += lost - colUnweighted;
       t -= lost;
       x += u * go;
       y += v * go;
@@ -127,19 +150,19 @@ export function transportElectron(
   }
   if (escaped) {
     // An escaping positron carries its rest energy (2m_ec² was taken from the photon) away.
-    const carried = positron ? t + 2 * M : t;
+    const carried = (positron ? t + 2 * M : t) * weight;
     ctx.tally.escapedMeV += carried;
     ctx.scorer.escape?.(positron ? POSITRON : ELECTRON, carried, z, w, false);
   } else {
-    ctx.localDeposit(x, y, z, region, t, primary);
+    ctx.localDeposit(x, y, z, region, t * weight, primary);
     if (positron) {
       const cosT = 2 * rng.next() - 1;
       const sinT = Math.sqrt(1 - cosT * cosT);
       const phi = TWO_PI * rng.next();
       const au = sinT * Math.cos(phi),
         av = sinT * Math.sin(phi);
-      ctx.stack.push(PHOTON, M, x, y, z, au, av, cosT, region, false);
-      ctx.stack.push(PHOTON, M, x, y, z, -au, -av, -cosT, region, false);
+      ctx.stack.push(PHOTON, M, x, y, z, au, av, cosT, region, false, weight);
+      ctx.stack.push(PHOTON, M, x, y, z, -au, -av, -cosT, region, false, weight);
     }
   }
   if (bank > 0) {
@@ -148,6 +171,6 @@ export function transportElectron(
     d.v = v0;
     d.w = w0;
     rotateDirection(d, Math.cos(M / (t0 + M)), TWO_PI * rng.next());
-    ctx.stack.push(PHOTON, bank, x0, y0, z0, d.u, d.v, d.w, r0, false);
+    ctx.stack.push(PHOTON, bank, x0, y0, z0, d.u, d.v, d.w, r0, false, weight);
   }
 }

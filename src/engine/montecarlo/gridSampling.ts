@@ -9,7 +9,41 @@ export function binOfDepth(depthCm: number, binCm: number, nBins: number): numbe
   return Math.min(nBins - 1, Math.max(0, i));
 }
 
-/** Values (and their 1σ) at each depth; `values`, `sigma` are per bin of width `binCm`. */
+/**
+ * How a depth is read from the bins: value = (1 − t)·bin i + t·bin j, linear between bin centres
+ * inside one layer; j = −1 (bin i alone) where the neighbouring centre lies across an interface or
+ * beyond the ends.
+ */
+export interface BinReading {
+  i: number;
+  j: number;
+  t: number;
+}
+
+export function binReadings(
+  phantom: SlabPhantom,
+  binCm: number,
+  nBins: number,
+  depthsCm: readonly number[],
+): BinReading[] {
+  const centre = (i: number): number => (i + 0.5) * binCm;
+  const layerAt = (d: number): number =>
+    layerIndexAtDepth(phantom, Math.min(Math.max(d, 0), phantom.totalThicknessCm));
+  return depthsCm.map((d) => {
+    const i = binOfDepth(d, binCm, nBins);
+    const j = d < centre(i) ? i - 1 : i + 1;
+    const layer = layerAt(d);
+    if (j >= 0 && j < nBins && layerAt(centre(i)) === layer && layerAt(centre(j)) === layer)
+      return { i, j, t: Math.abs(d - centre(i)) / binCm };
+    return { i, j: -1, t: 0 };
+  });
+}
+
+/**
+ * Values (and their 1σ) at each depth; `values`, `sigma` are per bin of width `binCm`. The σ is
+ * interpolated like the value, which assumes neighbouring bins fully correlated (an upper bound);
+ * where the batches are at hand, readingStatistics() gives the batch σ of the reading itself.
+ */
 export function sampleBinsAtDepths(
   phantom: SlabPhantom,
   binCm: number,
@@ -17,24 +51,8 @@ export function sampleBinsAtDepths(
   sigma: readonly number[],
   depthsCm: readonly number[],
 ): { value: number[]; sigma: number[] } {
-  const n = values.length;
-  const centre = (i: number): number => (i + 0.5) * binCm;
-  const layerAt = (d: number): number =>
-    layerIndexAtDepth(phantom, Math.min(Math.max(d, 0), phantom.totalThicknessCm));
-  const outV: number[] = [];
-  const outS: number[] = [];
-  for (const d of depthsCm) {
-    const i = binOfDepth(d, binCm, n);
-    const j = d < centre(i) ? i - 1 : i + 1;
-    const layer = layerAt(d);
-    if (j >= 0 && j < n && layerAt(centre(i)) === layer && layerAt(centre(j)) === layer) {
-      const t = Math.abs(d - centre(i)) / binCm;
-      outV.push((values[i] as number) * (1 - t) + (values[j] as number) * t);
-      outS.push((sigma[i] as number) * (1 - t) + (sigma[j] as number) * t);
-    } else {
-      outV.push(values[i] as number);
-      outS.push(sigma[i] as number);
-    }
-  }
-  return { value: outV, sigma: outS };
+  const readings = binReadings(phantom, binCm, values.length, depthsCm);
+  const at = (a: readonly number[], r: BinReading): number =>
+    r.j < 0 ? (a[r.i] as number) : (a[r.i] as number) * (1 - r.t) + (a[r.j] as number) * r.t;
+  return { value: readings.map((r) => at(values, r)), sigma: readings.map((r) => at(sigma, r)) };
 }

@@ -9,6 +9,12 @@ import type { LayerSpec } from '../phantom/slabPhantom';
 import type { DoseQuantity } from '../dose/doseQuantity';
 import type { TransportOptions } from './transport';
 import { DEFAULT_BINNING, type McBinning, type McScenario } from './scenario';
+import {
+  calibrationZoneCm,
+  pointZonesCm,
+  varianceReductionOf,
+  type VarianceReduction,
+} from './importanceZones';
 
 /** The parts of a case file the Monte Carlo needs (a LaminaCase fits). */
 export interface McCaseInput {
@@ -37,6 +43,13 @@ export interface McOptions {
   /** Collimator-scatter factor S_c of the field (the MC models the phantom only; default 1). */
   collimatorScatterFactor?: number;
   transport?: TransportOptions;
+  /**
+   * Analogue transport: no variance reduction. By default the incident photons' first
+   * interactions are forced into the depths feeding those read (points of interest, calibration
+   * window) and charged particles that cannot reach them meet a Russian roulette
+   * (importanceZones.ts); the results stay unbiased.
+   */
+  analogue?: boolean;
 }
 
 export type McRole = 'case' | 'water' | 'reference';
@@ -48,6 +61,8 @@ export interface McPlan {
   binning: McBinning;
   scenarios: McScenario[];
   roles: Record<McRole, number>;
+  /** Variance reduction of each scenario (undefined: analogue transport). */
+  variance: (VarianceReduction | undefined)[];
   options: McOptions;
   points: { id: string; depthCm: number }[];
 }
@@ -103,6 +118,17 @@ export function planMonteCarlo(c: McCaseInput, options: McOptions): McPlan {
     }
     roles[role] = i;
   }
+  const pointDepths = c.points.map((p) => p.depthCm);
+  const variance = options.analogue
+    ? scenarios.map(() => undefined)
+    : varianceReductionOf(scenarios, [
+        { scenario: roles.case, zonesCm: pointZonesCm(wanted.case, binning, pointDepths) },
+        { scenario: roles.water, zonesCm: pointZonesCm(wanted.water, binning, pointDepths) },
+        {
+          scenario: roles.reference,
+          zonesCm: calibrationZoneCm(wanted.reference, binning, options.referenceDMaxCm),
+        },
+      ]);
   return {
     seed: options.seed,
     batches,
@@ -110,6 +136,7 @@ export function planMonteCarlo(c: McCaseInput, options: McOptions): McPlan {
     binning,
     scenarios,
     roles,
+    variance,
     options,
     points: c.points.map((p) => ({ id: p.id, depthCm: p.depthCm })),
   };

@@ -7,13 +7,14 @@ import { cumulativeMassThicknessGPerCm2 } from '../phantom/slabPhantom';
 import type { MethodResult } from '../methodResult';
 import type { BatchAccumulator } from './batchStatistics';
 import {
+  binDoseFactors,
   depthDoseFromStatistics,
   depthOfMaximum,
   GRAY_PER_MEV_PER_G,
   type McDepthDose,
 } from './depthDose';
 import { calibrationMaximum } from './calibrationMaximum';
-import { sampleBinsAtDepths } from './gridSampling';
+import { binReadings, sampleBinsAtDepths } from './gridSampling';
 import type { McPlan } from './monteCarloPlan';
 import { scoringGrid, type ScoringGrid } from './scenario';
 import { makeSpectrumSampler } from './spectrumSampler';
@@ -90,12 +91,28 @@ export function finalizeMonteCarlo(
     const b = (waterDd.sigmaGyCm2[i] as number) / (waterDd.dosePerFluenceGyCm2[i] as number);
     return r * Math.sqrt(a * a + b * b);
   });
-  const onGrid = sampleBinsAtDepths(phantom, binCm, perMu, perMuSigma, depthGridCm);
+  const acc = accumulators[plan.roles.case]!;
+  const caseFactors = binDoseFactors(caseScenario, scoringGrid(caseScenario, plan.binning));
+  /**
+   * Dose per MU at depths and its 1σ: the case's part taken batch by batch on the reading itself
+   * (interpolating the bins' σ would count neighbouring bins as fully correlated and overstate it
+   * by up to √2 between bin centres), the calibration's part in quadrature.
+   */
+  const perMuAt = (depths: readonly number[]) => {
+    const { value } = sampleBinsAtDepths(phantom, binCm, perMu, perMuSigma, depths);
+    const sigma = binReadings(phantom, binCm, perMu.length, depths).map((r, k) => {
+      const a = (caseFactors[r.i] as number) * muPerFluence * (r.j < 0 ? 1 : 1 - r.t);
+      const b = r.j < 0 ? 0 : (caseFactors[r.j] as number) * muPerFluence * r.t;
+      const s = acc.caxPairStatistics(r.i, a, r.j < 0 ? r.i : r.j, b).sigma;
+      return Math.hypot(s, (value[k] as number) * relRef);
+    });
+    return { value, sigma };
+  };
+  const onGrid = perMuAt(depthGridCm);
   const cfGrid = sampleBinsAtDepths(phantom, binCm, cf, cfSigma, depthGridCm);
   const pointDepths = plan.points.map((p) => p.depthCm);
-  const atPoints = sampleBinsAtDepths(phantom, binCm, perMu, perMuSigma, pointDepths);
+  const atPoints = perMuAt(pointDepths);
   const cfPoints = sampleBinsAtDepths(phantom, binCm, cf, cfSigma, pointDepths);
-  const acc = accumulators[plan.roles.case]!;
   const histories = acc.histories;
   const spectrum = makeSpectrumSampler(caseScenario.energy);
   const finite = (v: number): number | null => (Number.isFinite(v) ? v : null);
@@ -113,6 +130,7 @@ export function finalizeMonteCarlo(
       `dose/MU calibrated by a water run 10 × 10 cm², SSD 100, d_max ${max.depthCm.toFixed(2)} cm = ${refRate} cGy/MU`,
       `S_c = ${sc}`,
       `${histories} histories in ${acc.completed} of ${plan.batches} batches, seed ${plan.seed}`,
+      varianceNote(plan),
       spectrum.approximate ? 'spectrum approximate (derived stand-in)' : 'published spectrum',
     ].join('; '),
     methodClass: 'type C',
@@ -185,6 +203,13 @@ export function finalizeMonteCarlo(
     },
     energyBalance: acc.energy(),
   };
+}
+
+/** How the run reduced its variance (stated with every result). */
+function varianceNote(plan: McPlan): string {
+  const vr = plan.variance[plan.roles.case];
+  if (!vr) return 'analogue transport (no variance reduction)';
+  return `variance reduction (unbiased): first interaction of the incident photons forced into the depths feeding the points and the calibration window, Russian roulette (survival 1/${Math.round(1 / vr.survival)}) of electrons and positrons that cannot reach them; the curve away from the points is noisier`;
 }
 
 /** Box filter of the lateral deposit histogram by the field width at each depth (see depthDoseScorer). */

@@ -13,6 +13,8 @@ export class ParticleStack {
   /** For charged particles: set in motion by the first interaction of an incident photon. For photons: never interacted. */
   flag: Uint8Array;
   energyMeV: Float64Array;
+  /** Statistical weight (1 unless variance reduction changed it); scores are energy × weight. */
+  weight: Float64Array;
   x: Float64Array;
   y: Float64Array;
   z: Float64Array;
@@ -26,6 +28,7 @@ export class ParticleStack {
     this.region = new Int32Array(capacity);
     this.flag = new Uint8Array(capacity);
     this.energyMeV = new Float64Array(capacity);
+    this.weight = new Float64Array(capacity);
     this.x = new Float64Array(capacity);
     this.y = new Float64Array(capacity);
     this.z = new Float64Array(capacity);
@@ -45,6 +48,7 @@ export class ParticleStack {
     w: number,
     region: number,
     flag: boolean,
+    weight = 1,
   ): void {
     if (this.size === this.capacity) this.grow();
     const i = this.size++;
@@ -58,6 +62,7 @@ export class ParticleStack {
     this.w[i] = w;
     this.region[i] = region;
     this.flag[i] = flag ? 1 : 0;
+    this.weight[i] = weight;
   }
 
   private grow(): void {
@@ -74,6 +79,7 @@ export class ParticleStack {
     this.region = g(this.region, (n) => new Int32Array(n));
     this.flag = g(this.flag, (n) => new Uint8Array(n));
     this.energyMeV = g(this.energyMeV, (n) => new Float64Array(n));
+    this.weight = g(this.weight, (n) => new Float64Array(n));
     this.x = g(this.x, (n) => new Float64Array(n));
     this.y = g(this.y, (n) => new Float64Array(n));
     this.z = g(this.z, (n) => new Float64Array(n));

@@ -85,7 +85,8 @@ export function simulatePointKernel(opts: PointKernelOptions): PointKernelResult
     sphereGeometry(radiusCm, { materialId: 'water', densityGPerCm3: 1 }),
     scorer,
     {
-      maxStepCm: Math.max(0.01, Math.min(0.1, edges[0] as number)),
+      // Water at 1 g/cm³: the mass-thickness limit equals the step length in cm.
+      maxStepGPerCm2: Math.max(0.01, Math.min(0.1, edges[0] as number)),
       ...opts.transport,
     },
   );

@@ -9,6 +9,9 @@ import { makeSpectrumSampler } from './spectrumSampler';
 import { pencilRay, type SourceRay } from './beamSource';
 import { Rng } from './rng';
 import { scoringGrid, type McBinning, type McScenario } from './scenario';
+import { ChargedRoulette } from './chargedRoulette';
+import { ForcedRay } from './forcedInteraction';
+import type { VarianceReduction } from './importanceZones';
 
 export interface BatchTask {
   scenario: McScenario;
@@ -17,6 +20,8 @@ export interface BatchTask {
   batchIndex: number;
   historiesPerBatch: number;
   transport?: TransportOptions;
+  /** Variance reduction (importanceZones.ts); analogue transport without it. */
+  variance?: VarianceReduction;
 }
 
 export interface BatchTally {
@@ -32,20 +37,36 @@ export function runBatch(task: BatchTask): BatchTally {
   const started = Date.now();
   const grid = scoringGrid(task.scenario, task.binning);
   const scorer = new DepthDoseScorer(grid);
+  const phantom = makeSlabPhantom(task.scenario.layers);
   const transport = new Transport(
-    slabGeometry(makeSlabPhantom(task.scenario.layers)),
+    slabGeometry(phantom),
     scorer,
     task.transport,
+    task.variance ? new ChargedRoulette(phantom, task.variance) : undefined,
   );
   const spectrum = makeSpectrumSampler(task.scenario.energy);
   const rng = new Rng(task.seed, 0);
   const ray: SourceRay = { x: 0, y: 0, u: 0, v: 0, w: 1 };
   pencilRay(ray);
+  const forced = task.variance?.forcedCm.length
+    ? new ForcedRay(
+        transport.geometry,
+        ray.x,
+        ray.y,
+        0,
+        ray.u,
+        ray.v,
+        ray.w,
+        0,
+        task.variance.forcedCm,
+      )
+    : undefined;
   const first = task.batchIndex * task.historiesPerBatch;
   for (let h = 0; h < task.historiesPerBatch; h++) {
     rng.seedHistory(task.seed, first + h);
     const e = spectrum.sample(rng);
-    transport.runPhoton(e, ray.x, ray.y, 0, ray.u, ray.v, ray.w, 0, rng);
+    if (forced) forced.run(transport, e, rng);
+    else transport.runPhoton(e, ray.x, ray.y, 0, ray.u, ray.v, ray.w, 0, rng);
   }
   return {
     batchIndex: task.batchIndex,

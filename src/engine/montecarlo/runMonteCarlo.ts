@@ -16,6 +16,7 @@ export function batchTasksOf(plan: McPlan): PlannedTask[] {
   const out: PlannedTask[] = [];
   for (let b = 0; b < plan.batches; b++) {
     plan.scenarios.forEach((scenario, scenarioIndex) => {
+      const variance = plan.variance[scenarioIndex];
       out.push({
         scenarioIndex,
         task: {
@@ -25,6 +26,7 @@ export function batchTasksOf(plan: McPlan): PlannedTask[] {
           batchIndex: b,
           historiesPerBatch: plan.historiesPerBatch,
           ...(plan.options.transport ? { transport: plan.options.transport } : {}),
+          ...(variance ? { variance } : {}),
         },
       });
     });

@@ -20,6 +20,7 @@ import { ParticleStack, PHOTON, ELECTRON, POSITRON } from './particleStack';
 import type { Rng } from './rng';
 import type { EnergyTally, McScorer, TransportOptions } from './transportTypes';
 import { transportElectron, type ElectronContext } from './electronTransport';
+import type { ChargedRoulette } from './chargedRoulette';
 
 const M = ELECTRON_REST_ENERGY_MEV;
 const TWO_PI = 2 * Math.PI;
@@ -32,6 +33,7 @@ export class Transport implements ElectronContext {
     depositedMeV: 0,
     escapedMeV: 0,
     belowCutoffMeV: 0,
+    weightNetMeV: 0,
   };
   readonly stack = new ParticleStack();
   private readonly photonTables: PhotonTables[];
@@ -41,7 +43,8 @@ export class Transport implements ElectronContext {
   readonly eCut: number;
   private readonly gCut: number;
   readonly fLoss: number;
-  readonly maxStep: number;
+  /** Maximum electron step in each region (cm): the mass-thickness limit over the density. */
+  readonly maxStepCm: Float64Array;
   private readonly compton: ComptonSample = { scatteredMeV: 0, cosTheta: 1 };
   readonly dir: Direction = { u: 0, v: 0, w: 1 };
 
@@ -49,6 +52,8 @@ export class Transport implements ElectronContext {
     readonly geometry: McGeometry,
     readonly scorer: McScorer,
     options: TransportOptions = {},
+    /** Variance reduction: roulette of charged particles that cannot reach a zone of interest. */
+    readonly roulette: ChargedRoulette | undefined = undefined,
   ) {
     const regions = geometry.regions;
     this.photonTables = regions.map((r) => photonTablesOf(r.materialId));
@@ -60,7 +65,8 @@ export class Transport implements ElectronContext {
     this.eCut = options.electronCutoffMeV ?? 0.189;
     this.gCut = options.photonCutoffMeV ?? 0.01;
     this.fLoss = options.maxEnergyLossFraction ?? 0.08;
-    this.maxStep = options.maxStepCm ?? 0.25;
+    const maxStepGPerCm2 = options.maxStepGPerCm2 ?? 0.25;
+    this.maxStepCm = this.density.map((rho) => maxStepGPerCm2 / rho);
   }
 
   /** Transports one incident photon (and everything it sets in motion) to the end. */
@@ -93,7 +99,7 @@ export class Transport implements ElectronContext {
     rng: Rng,
   ): void {
     this.tally.incidentMeV += energyMeV;
-    this.interact(energyMeV, x, y, z, u, v, w, region, true, rng);
+    this.interact(energyMeV, x, y, z, u, v, w, region, true, 1, rng);
     this.drain(rng);
   }
 
@@ -111,8 +117,10 @@ export class Transport implements ElectronContext {
       const u = s.u[i] as number;
       const v = s.v[i] as number;
       const w = s.w[i] as number;
-      if (kind === PHOTON) this.photon(e, x, y, z, u, v, w, region, flag, rng);
-      else transportElectron(this, kind === POSITRON, e, x, y, z, u, v, w, region, flag, rng);
+      const weight = s.weight[i] as number;
+      if (kind === PHOTON) this.photon(e, x, y, z, u, v, w, region, flag, weight, rng);
+      else
+        transportElectron(this, kind === POSITRON, e, x, y, z, u, v, w, region, flag, weight, rng);
     }
   }
 
@@ -126,11 +134,11 @@ export class Transport implements ElectronContext {
     w: number,
     region: number,
     uncollided: boolean,
+    weight: number,
     rng: Rng,
   ): void {
     if (e < this.gCut) {
-      this.tally.belowCutoffMeV += e;
-      this.scorer.deposit(x, y, z, region, e, false);
+      this.localDeposit(x, y, z, region, e * weight, false);
       return;
     }
     const pos = photonGridPosition(e);
@@ -155,19 +163,36 @@ export class Transport implements ElectronContext {
       tau -= mu * db;
       region = this.geometry.regionAfterCrossing(region, x, y, z, u, v, w);
       if (region < 0) {
-        this.tally.escapedMeV += e;
-        this.scorer.escape?.(PHOTON, e, z, w, uncollided);
+        this.tally.escapedMeV += e * weight;
+        this.scorer.escape?.(PHOTON, e * weight, z, w, uncollided);
         return;
       }
       mu =
         atGrid((this.photonTables[region] as PhotonTables).muCm2PerG, pos) *
         (this.density[region] as number);
     }
-    this.interact(e, x, y, z, u, v, w, region, uncollided, rng);
+    this.interact(e, x, y, z, u, v, w, region, uncollided, weight, rng);
   }
 
-  /** One photon interaction at a point; charged products are `primary` when the photon was uncollided. */
-  private interact(
+  /** Linear attenuation coefficient (1/cm) of `region` at a photon grid position. */
+  photonMuCm(region: number, gridPosition: number): number {
+    return (
+      atGrid((this.photonTables[region] as PhotonTables).muCm2PerG, gridPosition) *
+      (this.density[region] as number)
+    );
+  }
+
+  /** Transports everything on the stack to the end. */
+  drainStack(rng: Rng): void {
+    this.drain(rng);
+  }
+
+  /**
+   * One photon interaction at a point; charged products are `primary` when the photon was
+   * uncollided. With `photonSurvival` < 1 the scattered photon meets a Russian roulette (kept
+   * with that probability, its weight divided by it).
+   */
+  interact(
     e: number,
     x: number,
     y: number,
@@ -177,7 +202,9 @@ export class Transport implements ElectronContext {
     w: number,
     region: number,
     primary: boolean,
+    weight: number,
     rng: Rng,
+    photonSurvival = 1,
   ): void {
     const t = this.photonTables[region] as PhotonTables;
     const pos = photonGridPosition(e);
@@ -196,15 +223,21 @@ export class Transport implements ElectronContext {
       const py = e * v - c.scatteredMeV * d.v;
       const pz = e * w - c.scatteredMeV * d.w;
       const pn = Math.sqrt(px * px + py * py + pz * pz);
-      if (pn > 0)
-        this.stack.push(ELECTRON, te, x, y, z, px / pn, py / pn, pz / pn, region, primary);
-      else this.localDeposit(x, y, z, region, te, primary);
-      this.stack.push(PHOTON, c.scatteredMeV, x, y, z, d.u, d.v, d.w, region, false);
+      const s = this.stack;
+      if (pn > 0) s.push(ELECTRON, te, x, y, z, px / pn, py / pn, pz / pn, region, primary, weight);
+      else this.localDeposit(x, y, z, region, te * weight, primary);
+      if (photonSurvival >= 1)
+        s.push(PHOTON, c.scatteredMeV, x, y, z, d.u, d.v, d.w, region, false, weight);
+      else if (rng.next() < photonSurvival) {
+        const kept = weight / photonSurvival;
+        this.tally.weightNetMeV += c.scatteredMeV * (kept - weight);
+        s.push(PHOTON, c.scatteredMeV, x, y, z, d.u, d.v, d.w, region, false, kept);
+      } else this.tally.weightNetMeV -= c.scatteredMeV * weight;
       return;
     }
     if (xi < atGrid(t.pComptonOrPhoto, pos) || e <= 2 * M) {
-      this.tally.depositedMeV += e;
-      this.scorer.deposit(x, y, z, region, e, primary);
+      this.tally.depositedMeV += e * weight;
+      this.scorer.deposit(x, y, z, region, e * weight, primary);
       return;
     }
     const available = e - 2 * M;
@@ -216,14 +249,15 @@ export class Transport implements ElectronContext {
     d.v = v;
     d.w = w;
     rotateDirection(d, cosT, phi);
-    this.stack.push(ELECTRON, tMinus, x, y, z, d.u, d.v, d.w, region, primary);
+    this.stack.push(ELECTRON, tMinus, x, y, z, d.u, d.v, d.w, region, primary, weight);
     d.u = u;
     d.v = v;
     d.w = w;
     rotateDirection(d, cosT, phi + Math.PI);
-    this.stack.push(POSITRON, available - tMinus, x, y, z, d.u, d.v, d.w, region, primary);
+    this.stack.push(POSITRON, available - tMinus, x, y, z, d.u, d.v, d.w, region, primary, weight);
   }
 
+  /** Deposits energy (already weighted) on the spot, as below a cutoff. */
   localDeposit(x: number, y: number, z: number, region: number, e: number, primary: boolean): void {
     this.tally.belowCutoffMeV += e;
     this.scorer.deposit(x, y, z, region, e, primary);

@@ -123,6 +123,42 @@ describe('the planning dose alone and missing numbers', () => {
 });
 
 describe('the deciding difference and the spread', () => {
+  it('decidingDifferenceOf(...) keeps the first of two differences equal to rounding (page and CLI name the same point)', () => {
+    // Two points with the same dose per MU but for the last bit (as the page's and the CLI's
+    // engines may give): the first in point order decides either way (derived).
+    const d = 0.5; // 100 cGy planned with 125 MU: ΔMU +60 %, Δdose −37.5 %, a fail decided by ΔMU
+    const dUp = d * (1 + 4 * Number.EPSILON);
+    const twoPoints = (a: number, b: number): CheckBeamInput => ({
+      id: 'AP',
+      label: 'AP',
+      weight: 1,
+      planningMu: 125,
+      layers: LUNG,
+      points: [
+        { id: 'P1', depthCm: 5, planningDoseCGy: 100 },
+        { id: 'P2', depthCm: 6, planningDoseCGy: 100 },
+      ],
+      methods: [
+        {
+          id: 'superposition',
+          label: 'superposition',
+          points: [
+            { id: 'P1', dosePerMuCGy: a },
+            { id: 'P2', dosePerMuCGy: b },
+          ],
+        },
+      ],
+    });
+    const opts = { tolerances: DEFAULT_TOLERANCES, decisiveMethodId: 'superposition' };
+    for (const [a, b] of [
+      [d, dUp],
+      [dUp, d],
+    ] as const)
+      expect(checkPlan([twoPoints(a, b)], opts).decidingDifference?.pointId).toBe('P1');
+    // A real difference still moves it.
+    expect(checkPlan([twoPoints(d, d * 0.99)], opts).decidingDifference?.pointId).toBe('P2');
+  });
+
   it('verdictStatement(...) names the one difference that decides, with its sign and tolerance', () => {
     // Superposition: check MU = 100/0.76 = 131.58 vs 125 planning MU → +5.26 % (fails 5 %);
     // dose 125 × 0.76 = 95 cGy vs 100 → −5.00 % (passes): the MU difference decides.

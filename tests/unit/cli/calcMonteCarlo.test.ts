@@ -34,7 +34,7 @@ describe('Monte Carlo in the case calculation and the CLI', () => {
   it('mcOptionsOf(...) reads --mc-histories and --seed and rejects bad values', () => {
     expect(mcOptionsOf(new Map())).toEqual({});
     expect(mcOptionsOf(new Map([['mc-histories', '5000']]))).toEqual({
-      mc: { histories: 5000, seed: 1 },
+      mc: { histories: 5000, seed: 1, runner: expect.any(Function) },
     });
     expect(
       mcOptionsOf(
@@ -43,7 +43,7 @@ describe('Monte Carlo in the case calculation and the CLI', () => {
           ['seed', '9'],
         ]),
       ),
-    ).toEqual({ mc: { histories: 5000, seed: 9 } });
+    ).toEqual({ mc: { histories: 5000, seed: 9, runner: expect.any(Function) } });
     expect(() => mcOptionsOf(new Map([['mc-histories', 'many']]))).toThrow(
       '--mc-histories many: must be a number',
     );

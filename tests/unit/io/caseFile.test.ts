@@ -61,6 +61,12 @@ describe('validateCase rejections name the field and the rule', () => {
     expect(problemsOf(edit((c) => (c.layers[2].densityGPerCm3 = 3.5)))).toContain(
       'layers[2].densityGPerCm3: density must be ≤ 3 g/cm³',
     );
+    // A denormal density (found by the case fuzz: an infinite lateral electron range) is refused;
+    // air (0.0012 g/cm³, NIST) is not.
+    expect(problemsOf(edit((c) => (c.layers[0].densityGPerCm3 = 5e-324)))).toEqual([
+      'layers[0].densityGPerCm3: density must be ≥ 0.001 g/cm³',
+    ]);
+    expect(validateCase(edit((c) => (c.layers[0].densityGPerCm3 = 0.0012))).ok).toBe(true);
   });
 
   it('density below 0.001 g/cm³ (a denormal 5e-324 gave an infinite lateral range)', () => {

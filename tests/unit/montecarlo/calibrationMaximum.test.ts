@@ -84,7 +84,13 @@ describe('BatchAccumulator.caxLinearStatistics', () => {
         histories: 100,
         caxMeV: cax,
         lateralMeV: new Float64Array(0),
-        energy: { incidentMeV: 0, depositedMeV: 0, escapedMeV: 0, belowCutoffMeV: 0 },
+        energy: {
+          incidentMeV: 0,
+          depositedMeV: 0,
+          escapedMeV: 0,
+          belowCutoffMeV: 0,
+          weightNetMeV: 0,
+        },
         elapsedMs: 0,
       });
       sums.push((0.5 * cax[0]! + 2 * cax[1]!) / 100);

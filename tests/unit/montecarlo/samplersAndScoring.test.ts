@@ -4,12 +4,18 @@ import { Rng } from '../../../src/engine/montecarlo/rng';
 import { rotateDirection } from '../../../src/engine/montecarlo/direction';
 import { slabGeometry, sphereGeometry } from '../../../src/engine/montecarlo/geometry';
 import { makeSlabPhantom } from '../../../src/engine/phantom/slabPhantom';
-import { statistics } from '../../../src/engine/montecarlo/batchStatistics';
+import { BatchAccumulator, statistics } from '../../../src/engine/montecarlo/batchStatistics';
 import { depthOfMaximum } from '../../../src/engine/montecarlo/depthDose';
 import { binOfDepth, sampleBinsAtDepths } from '../../../src/engine/montecarlo/gridSampling';
 import { sampleDivergentRay } from '../../../src/engine/montecarlo/beamSource';
 import { planMonteCarlo } from '../../../src/engine/montecarlo/monteCarloPlan';
 import { expectRelClose } from '../../helpers/expectClose';
+import { DepthDoseScorer } from '../../../src/engine/montecarlo/depthDoseScorer';
+import {
+  DEFAULT_BINNING,
+  scoringGrid,
+  type McScenario,
+} from '../../../src/engine/montecarlo/scenario';
 
 describe('makeSpectrumSampler', () => {
   it('makeSpectrumSampler("6MV") samples the Mohan 6 MV spectrum: mean energy 1.90 MeV within 4σ', () => {
@@ -110,6 +116,34 @@ describe('statistics and binned curves', () => {
     expect(Number.isNaN(statistics([b(1)]).sigma[0])).toBe(true);
   });
 
+  it('caxPairStatistics(...) is the batch statistics of a·bin i + b·bin j (derived)', () => {
+    const acc = new BatchAccumulator(3);
+    const tally = (b: number, x: number, y: number) => ({
+      batchIndex: b,
+      histories: 10,
+      caxMeV: Float64Array.of(x * 10, y * 10),
+      lateralMeV: new Float64Array(0),
+      energy: {
+        incidentMeV: 0,
+        depositedMeV: 0,
+        escapedMeV: 0,
+        belowCutoffMeV: 0,
+        weightNetMeV: 0,
+      },
+      elapsedMs: 0,
+    });
+    acc.add(tally(0, 1, 3));
+    acc.add(tally(1, 2, 1));
+    acc.add(tally(2, 3, 2));
+    // Per batch 0.5·x + 0.5·y = 2, 1.5, 2.5: mean 2, s² = 0.25, s_x̄ = √(0.25/3).
+    const s = acc.caxPairStatistics(0, 0.5, 1, 0.5);
+    expect(s.mean).toBeCloseTo(2, 12);
+    expect(s.sigma).toBeCloseTo(Math.sqrt(0.25 / 3), 12);
+    // The two bins alone have σ 1/√3 each: a reading between them that ignored their
+    // (negative) correlation would report √(0.5²+0.5²)/√3 = 0.41 instead of 0.29.
+    expect(s.sigma).toBeLessThan(Math.SQRT1_2 / Math.sqrt(3));
+  });
+
   it('depthOfMaximum(...) recovers the vertex of a parabolic peak between bin centres', () => {
     const edges = Array.from({ length: 21 }, (_, i) => i * 0.25);
     const dose = edges.slice(0, 20).map((_, i) => 10 - ((i + 0.5) * 0.25 - 2.3) ** 2);
@@ -164,5 +198,27 @@ describe('statistics and binned curves', () => {
         { histories: 5, seed: 1 },
       ),
     ).toThrow(/histories/);
+  });
+});
+
+describe('depth scoring', () => {
+  const scenario: McScenario = {
+    energy: '6MV',
+    ssdCm: 100,
+    fieldXCm: 10,
+    fieldYCm: 10,
+    layers: [{ materialId: 'water', thicknessCm: 10 }],
+  };
+
+  it('depositAlong(...) spreads a leg over the bins it crosses in proportion to its path in each (derived)', () => {
+    const scorer = new DepthDoseScorer(scoringGrid(scenario, DEFAULT_BINNING));
+    // From z = 0.1 to 0.85 cm straight down: 0.15, 0.25, 0.25, 0.10 cm in bins 0–3 of 0.25 cm.
+    scorer.depositAlong(0, 0, 0.1, 0, 0, 1, 0.75, 0, 7.5);
+    const firstFour = [...scorer.caxMeV.slice(0, 4)].map((v) => Math.round(v * 1e9) / 1e9);
+    expect(firstFour).toEqual([1.5, 2.5, 2.5, 1]);
+    // Upwards, obliquely (w = −0.5): 1 cm of path covers 0.5 cm of depth, from 1.0 to 0.5 cm.
+    const up = new DepthDoseScorer(scoringGrid(scenario, DEFAULT_BINNING));
+    up.depositAlong(0, 0, 1.0, Math.sqrt(0.75), 0, -0.5, 1, 0, 4);
+    expect([...up.caxMeV.slice(0, 4)].map((v) => Math.round(v * 1e9) / 1e9)).toEqual([0, 0, 2, 2]);
   });
 });
