@@ -16,6 +16,8 @@ import type { WaterData } from '../engine/beam/waterData';
 import { isTypeAMethodId, typeAForCase, type TypeAVariants } from './typeAForCase';
 import { MONTE_CARLO_METHOD_ID, monteCarloForCase, type McCalcOptions } from './monteCarloForCase';
 import { isTypeBMethodId, typeBForCase } from './typeBForCase';
+import { CAUTIONS } from './reportText';
+import { depthGridCm } from './depthGrid';
 
 export const CALC_FORMAT = 'lamina.calc';
 export const CALC_VERSION = 1;
@@ -68,23 +70,8 @@ export interface CalcReport {
   cautions: string[];
 }
 
-export const CAUTIONS: readonly string[] = [
-  'Lamina is a teaching and independent-check aid, not a treatment-planning or MU-verification system.',
-  'A modelled beam is not a commissioned beam: results depend on the beam data entered or modelled.',
-  'Clinical decisions follow the local protocol and a licensed medical physicist’s judgement.',
-  'Slab phantoms are idealised: laterally infinite flat layers, central axis only, no patient contour or motion.',
-];
-
 export function phantomOfCase(c: LaminaCase): SlabPhantom {
   return makeSlabPhantom(c.layers);
-}
-
-/** Depth grid from 0 to the phantom's bottom with the given step, always including the bottom. */
-export function depthGridCm(totalCm: number, stepCm: number): number[] {
-  const n = Math.max(1, Math.round(totalCm / stepCm));
-  const out: number[] = [];
-  for (let i = 0; i <= n; i++) out.push((totalCm * i) / n);
-  return out;
 }
 
 export function calculateCase(c: LaminaCase, options: CalcOptions = {}): CalcReport {

@@ -5,14 +5,12 @@ import { calculateCase, type CalcOptions, type CalcReport } from './calculateCas
 import { waterDataForCase } from './typeAForCase';
 import { ssdCmOf } from '../engine/beam/geometry';
 import { dosePerMuFactors, type DosePerMuFactors } from '../engine/check/dosePerMu';
-import {
-  checkPlan,
-  type CheckBeamInput,
-  type PlanCheck,
-  type Prescription,
-} from '../engine/check/planCheck';
+import { checkPlan, type PlanCheck, type Prescription } from '../engine/check/planCheck';
 import { DEFAULT_TOLERANCES, type Tolerances } from '../engine/check/tolerance';
 import type { LaminaPlan } from '../io/planFile';
+import { checkInputOf } from './checkInput';
+
+export { checkInputOf };
 
 export interface PlanCalcOptions extends CalcOptions {
   /** Overrides the plan's tolerances (e.g. edited on the page). */
@@ -38,31 +36,6 @@ export interface PlanReport {
   planName: string;
   beams: PlanBeamReport[];
   check: PlanCheck;
-}
-
-/** The check's view of one calculated beam. */
-export function checkInputOf(
-  beam: { id: string; label: string; weight: number },
-  c: LaminaPlan['beams'][number]['case'],
-  report: CalcReport,
-): CheckBeamInput {
-  return {
-    id: beam.id,
-    label: beam.label,
-    weight: beam.weight,
-    layers: report.layers,
-    points: c.points,
-    methods: report.methods.map((m) => ({
-      id: m.id,
-      label: m.label,
-      // The Monte Carlo's statistical 1σ travels with its dose per MU (deterministic methods have none).
-      points: m.points.map((p) =>
-        p.sigmaDosePerMuCGy === undefined
-          ? { id: p.id, dosePerMuCGy: p.dosePerMuCGy }
-          : { id: p.id, dosePerMuCGy: p.dosePerMuCGy, sigmaDosePerMuCGy: p.sigmaDosePerMuCGy },
-      ),
-    })),
-  };
 }
 
 /** The water factor chain at each point of a case (empty without water data). */

@@ -3,7 +3,10 @@
 import { calculateCase, type CalcOptions, type CalcReport } from './calculateCase';
 import { validateCase } from '../io/caseFile';
 import { makeSlabPhantom, radiologicalDepthCurve } from '../engine/phantom/slabPhantom';
-import { depthGridCm } from './calculateCase';
+import { depthGridCm } from './depthGrid';
+import { waterChainsOf } from './calculatePlan';
+import { monteCarloCalibration, type McCalibration } from './monteCarloCalibration';
+import type { DosePerMuFactors } from '../engine/check/dosePerMu';
 import type { LayerSpec } from '../engine/phantom/slabPhantom';
 import {
   buildMeasuredWaterData,
@@ -99,6 +102,33 @@ export const computeApi = {
         profileDepthsCm,
       }),
     };
+  },
+  /**
+   * The water dose-per-MU factor chain at each point of a case (for the check's record), from the
+   * modelled beam ('modelled') or the case's own table.
+   */
+  waterChains(
+    raw: unknown,
+    options: { waterSource?: 'case' | 'modelled' } = {},
+  ):
+    | { ok: true; chains: Record<string, DosePerMuFactors> }
+    | { ok: false; problems: { path: string; message: string }[] } {
+    const v = validateCase(raw);
+    if (!v.ok) return v;
+    const waterData =
+      options.waterSource === 'modelled' ? modelledWaterData(v.value.beam.energy) : undefined;
+    return { ok: true, chains: waterChainsOf(v.value, waterData ? { waterData } : {}) };
+  },
+  /** Reference dose rate, S_c and d_max that tie the page's Monte Carlo run to MU. */
+  monteCarloCalibration(
+    raw: unknown,
+    waterSource?: string,
+  ):
+    | { ok: true; calibration: McCalibration }
+    | { ok: false; problems: { path: string; message: string }[] } {
+    const v = validateCase(raw);
+    if (!v.ok) return v;
+    return { ok: true, calibration: monteCarloCalibration(v.value, waterSource) };
   },
   /** Validate a measured TMR/PDD table (and scatter factors): problems, or a summary with plot data. */
   parseWaterTable(

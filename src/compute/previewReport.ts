@@ -6,7 +6,7 @@
 import { lerp } from '../engine/units';
 import type { MethodCurve, MethodResult } from '../engine/methodResult';
 import type { CalcReport } from './calculateCase';
-import { TYPE_A_METHOD_IDS } from '../engine/corrections/typeAMethods';
+import { TYPE_A_METHOD_IDS } from '../engine/corrections/typeAMethodIds';
 
 /** Methods that wait for the full calculation (superposition; Monte Carlo is never recomputed). */
 export const SLOW_METHOD_IDS: readonly string[] = ['superposition', 'monte-carlo'];

@@ -17,8 +17,7 @@ import { typeAMethodResults } from '../engine/corrections/typeAResults';
 import type { MethodResult } from '../engine/methodResult';
 import type { SlabPhantom } from '../engine/phantom/slabPhantom';
 import type { LaminaCase } from '../io/caseSchema';
-
-export const NEEDS_WATER_DATA = 'needs water data: load a measured TMR/PDD table';
+import { NEEDS_WATER_DATA } from './reportText';
 
 /**
  * ETAR's default layer weights: the scatter part of our own water kernel for the beam. TERMA is

@@ -1,7 +1,7 @@
 // The page: header with case actions, the cautions, the case editor on the left and the
 // comparison views on the right, all reading one store.
 import { useEffect, type KeyboardEvent } from 'react';
-import { CAUTIONS } from '../compute/calculateCase';
+import { CAUTIONS } from '../compute/reportText';
 import { setNotice, setTab, setTheme, useAppStore, type Theme, type ViewTab } from '../state/store';
 import { BeamPanel } from './BeamPanel';
 import { CfView, DoseView } from './ChartViews';

@@ -9,9 +9,9 @@ import { APP_VERSION } from '../../io/report/appVersion';
 import { buildReportModel, isoDate } from '../../io/report/reportModel';
 import { downloadReportPdf } from '../../io/report/reportPdf';
 import { shareUrlOf } from '../../io/shareLink';
-import { setNotice } from '../../state/store';
+import { setNotice, useAppStore } from '../../state/store';
 import { downloadBlob, downloadText } from './download';
-import { planReportOf, type CheckView } from './useCheck';
+import { planReportOf, waterChainsOfPlan, type CheckView } from './useCheck';
 
 const CSV = 'text/csv;charset=utf-8';
 
@@ -36,9 +36,13 @@ export function ExportBar({
   const pdf = async () => {
     setBusy(true);
     try {
+      // Chains still on their way after an edit are asked for here, so the record has them.
+      const chains =
+        view.waterChains ??
+        (await waterChainsOfPlan(view.plan, useAppStore.getState().waterSource));
       const model = buildReportModel({
         plan: view.plan,
-        result: planReportOf(view),
+        result: planReportOf(view, chains),
         date: new Date(),
         appVersion: APP_VERSION,
       });

@@ -1,10 +1,11 @@
 // Everything the check panel shows, derived from the editor's case and its latest calculation
 // plus the check inputs: the plan, the point check, and (on demand) the printable record.
-import { useEffect, useMemo } from 'react';
+import { useEffect, useMemo, useState } from 'react';
 import type { CalcReport } from '../../compute/calculateCase';
-import { checkInputOf, waterChainsOf, type PlanReport } from '../../compute/calculatePlan';
+import type { PlanReport } from '../../compute/calculatePlan';
+import { checkInputOf } from '../../compute/checkInput';
 import { getComputeWorker } from '../../compute/computeClient';
-import { modelledWaterData } from '../../engine/beam/modelledBeam';
+import type { DosePerMuFactors } from '../../engine/check/dosePerMu';
 import { checkPlan, type PlanCheck } from '../../engine/check/planCheck';
 import type { LaminaCase } from '../../io/caseSchema';
 import { PLAN_FORMAT, PLAN_VERSION } from '../../io/planSchema';
@@ -12,7 +13,7 @@ import type { LaminaPlan } from '../../io/planFile';
 import { toCaseFile } from '../../state/editorCase';
 import { useShownReport } from '../montecarlo/useShownReport';
 import { onRecalcRequest } from '../../state/recalc';
-import { useAppStore } from '../../state/store';
+import { useAppStore, type WaterSource } from '../../state/store';
 import { patchExtraBeam, useCheckStore, type CheckState } from './checkStore';
 
 export interface CheckView {
@@ -21,7 +22,15 @@ export interface CheckView {
   reports: { id: string; label: string; weight: number; case: LaminaCase; report: CalcReport }[];
   pending: string[];
   check: PlanCheck;
+  /**
+   * Water factor chains per beam and point for the record, from the compute worker; null while
+   * they are being asked for (after an edit).
+   */
+  waterChains: WaterChains | null;
 }
+
+/** Water dose-per-MU factor chains per beam id and point id. */
+export type WaterChains = Record<string, Record<string, DosePerMuFactors>>;
 
 export function planOf(first: LaminaCase, s: CheckState): LaminaPlan {
   const plan: LaminaPlan = {
@@ -91,6 +100,50 @@ export function useExtraBeamCalculations(): void {
 export const WORKER_PROBLEM_PATH = '(calculation)';
 
 /**
+ * The water factor chains of every beam of a plan, from the compute worker (the water data lives
+ * there): the modelled beam when the page uses it, else each case's own table (none without one).
+ */
+export async function waterChainsOfPlan(
+  plan: LaminaPlan,
+  waterSource: WaterSource,
+): Promise<WaterChains> {
+  const worker = getComputeWorker();
+  const source = waterSource === 'modelled' ? 'modelled' : 'case';
+  const answers = await Promise.all(
+    plan.beams.map((b) => worker.waterChains(b.case, { waterSource: source })),
+  );
+  return Object.fromEntries(
+    plan.beams.map((b, i) => [b.id, answers[i]?.ok ? answers[i].chains : {}]),
+  );
+}
+
+/** The chains of the plan's beams, asked again only when a beam's case or the water source changes. */
+function useWaterChains(plan: LaminaPlan | null): WaterChains | null {
+  const source = useAppStore((s) => s.waterSource);
+  const key = useMemo(
+    () => (plan ? JSON.stringify([source, plan.beams.map((b) => [b.id, b.case])]) : null),
+    [plan, source],
+  );
+  const [got, setGot] = useState<{ key: string; chains: WaterChains } | null>(null);
+  useEffect(() => {
+    if (!plan || key === null) return;
+    let live = true;
+    waterChainsOfPlan(plan, source).then(
+      (chains) => {
+        if (live) setGot({ key, chains });
+      },
+      // The worker was lost: the record goes without chains until the next change (Retry).
+      () => undefined,
+    );
+    return () => {
+      live = false;
+    };
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- the key stands for plan and source
+  }, [key]);
+  return got !== null && got.key === key ? got.chains : null;
+}
+
+/**
  * The check of the plan whose first beam is the case being edited. The first beam's report is the
  * drawn one: the latest calculation plus the page's Monte Carlo run (with its 1σ) while that run
  * belongs to the case as it is now — a run left stale by an edit is not checked.
@@ -99,7 +152,7 @@ export function useCheckView(): CheckView | null {
   const present = useAppStore((s) => s.history.present);
   const report = useShownReport();
   const s = useCheckStore();
-  return useMemo(() => {
+  const view = useMemo(() => {
     if (!report) return null;
     const first = toCaseFile(present);
     const plan = planOf(first, s);
@@ -127,14 +180,15 @@ export function useCheckView(): CheckView | null {
     );
     return { plan, reports, pending, check };
   }, [present, report, s]);
+  const waterChains = useWaterChains(view?.plan ?? null);
+  return useMemo(() => (view ? { ...view, waterChains } : null), [view, waterChains]);
 }
 
 /**
- * The plan report the record is built from. The water factor chains are computed here from the
- * same water data the page's calculation used (the modelled beam, or the case's table).
+ * The plan report the record is built from, with the water factor chains given (by default the
+ * view's, from the same water data the page's calculation used).
  */
-export function planReportOf(view: CheckView): PlanReport {
-  const modelled = useAppStore.getState().waterSource === 'modelled';
+export function planReportOf(view: CheckView, chains = view.waterChains): PlanReport {
   return {
     format: 'lamina.plancalc',
     version: 1,
@@ -144,10 +198,7 @@ export function planReportOf(view: CheckView): PlanReport {
       label: b.label,
       weight: b.weight,
       report: b.report,
-      waterChains: waterChainsOf(
-        b.case,
-        modelled ? { waterData: modelledWaterData(b.case.beam.energy) } : {},
-      ),
+      waterChains: chains?.[b.id] ?? {},
     })),
     check: view.check,
   };

@@ -1,7 +1,7 @@
 // The "Monte Carlo run" view: settings, Start/Cancel, progress with live 1σ at the points of
 // interest, and what the run models. The run belongs to the case it was started for: once the
 // case is edited its result is marked stale and left out of the depth-dose and CF views.
-import { depthGridCm } from '../../compute/calculateCase';
+import { depthGridCm } from '../../compute/depthGrid';
 import { validateCase } from '../../io/caseFile';
 import { toCaseFile, totalThicknessCm } from '../../state/editorCase';
 import { useMonteCarloStore, type McRunStatus } from '../../state/monteCarloStore';

@@ -5,7 +5,8 @@ import { create } from 'zustand';
 import { startMonteCarlo, type McPoolOptions, type McRunHandle } from '../../compute/mcPool';
 import { setMonteCarlo, useMonteCarloStore } from '../../state/monteCarloStore';
 import type { LaminaCase } from '../../io/caseSchema';
-import { monteCarloCalibration, type McCalibration } from './mcCalibration';
+import type { McCalibration } from '../../compute/monteCarloCalibration';
+import { getComputeWorker } from '../../compute/computeClient';
 
 /** The form of the panel (kept when switching views) and what the current run was started with. */
 export interface McForm {
@@ -33,7 +34,8 @@ export function patchMcForm(patch: Partial<McForm>): void {
   useMcForm.setState(patch);
 }
 
-let current: { handle: McRunHandle; id: number } | null = null;
+/** The run in progress: its calibration still being asked for (handle null), or its pool running. */
+let current: { handle: McRunHandle | null; id: number } | null = null;
 let runCounter = 0;
 
 export interface StartRequest {
@@ -47,27 +49,59 @@ export interface StartRequest {
   depthGridCm: readonly number[];
   /** Worker count and factory (tests run the batches in-process); browser workers by default. */
   pool?: Pick<McPoolOptions, 'workers' | 'createWorker'>;
+  /** The run's calibration (tests compute it in-process); by default the compute worker's. */
+  calibrate?: (c: LaminaCase, waterSource?: string) => Promise<McCalibration>;
+}
+
+/** The calibration from the compute worker, where the water data is. */
+async function workerCalibration(c: LaminaCase, waterSource?: string): Promise<McCalibration> {
+  const r = await getComputeWorker().monteCarloCalibration(c, waterSource);
+  if (!r.ok) throw new Error(r.problems.map((p) => `${p.path}: ${p.message}`).join('; '));
+  return r.calibration;
 }
 
 export function startRun(req: StartRequest): void {
   cancelRun();
   const id = ++runCounter;
-  const calibration = monteCarloCalibration(req.caseData, req.waterSource);
-  patchMcForm({
-    run: {
-      histories: req.histories,
-      seed: req.seed,
-      doseToWater: req.doseToWater,
-      calibration,
-      startedAtMs: Date.now(),
-    },
-  });
+  const startedAtMs = Date.now();
+  current = { handle: null, id };
+  // The run's settings are shown once its calibration is known.
+  patchMcForm({ run: null });
   setMonteCarlo({
     status: 'running',
     caseKey: req.caseKey,
     result: null,
     progress: null,
     error: null,
+  });
+  const latest = (): boolean => id === runCounter && current?.id === id;
+  (req.calibrate ?? workerCalibration)(req.caseData, req.waterSource).then(
+    (calibration) => {
+      // Cancelled or replaced while the calibration was on its way: nothing is started.
+      if (latest()) startPool(req, id, calibration, startedAtMs);
+    },
+    (e: unknown) => {
+      if (!latest()) return;
+      current = null;
+      setMonteCarlo({ status: 'failed', error: messageOf(e) });
+    },
+  );
+}
+
+function startPool(
+  req: StartRequest,
+  id: number,
+  calibration: McCalibration,
+  startedAtMs: number,
+): void {
+  patchMcForm({
+    run: {
+      histories: req.histories,
+      seed: req.seed,
+      doseToWater: req.doseToWater,
+      calibration,
+      startedAtMs,
+    },
   });
   let handle: McRunHandle;
   try {
@@ -88,6 +122,7 @@ export function startRun(req: StartRequest): void {
       { ...req.pool, depthGridCm: req.depthGridCm },
     );
   } catch (e) {
+    current = null;
     setMonteCarlo({ status: 'failed', error: messageOf(e) });
     return;
   }
@@ -115,7 +150,9 @@ export function cancelRun(): void {
   if (!current) return;
   const { handle } = current;
   setMonteCarlo({ status: 'cancelled' });
-  handle.cancel();
+  if (handle) handle.cancel();
+  // A run still waiting for its calibration is dropped here; a running pool settles through done.
+  else current = null;
 }
 
 export function isRunActive(): boolean {

@@ -5,6 +5,7 @@
 import { describe, expect, it } from 'vitest';
 import type { McWorkerHandle } from '../../../src/compute/mcPool';
 import { calculateCase } from '../../../src/compute/calculateCase';
+import { monteCarloCalibration } from '../../../src/compute/monteCarloCalibration';
 import { runBatch } from '../../../src/engine/montecarlo/runBatch';
 import type { LaminaCase } from '../../../src/io/caseSchema';
 import { CASE_FORMAT, CASE_VERSION } from '../../../src/io/caseSchema';
@@ -56,6 +57,7 @@ const request = (caseKey: string, histories: number, delayMs = 0) => ({
   waterSource: 'modelled',
   depthGridCm: REPORT.depthCm,
   pool: { workers: 2, createWorker: () => localWorker(delayMs) },
+  calibrate: (c: LaminaCase, source?: string) => Promise.resolve(monteCarloCalibration(c, source)),
 });
 
 describe('startRun / cancelRun', () => {

@@ -5,7 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { modelledHeadScatter } from '../../../src/engine/beam/headScatter';
 import type { LaminaCase } from '../../../src/io/caseSchema';
 import { CASE_FORMAT, CASE_VERSION } from '../../../src/io/caseSchema';
-import { monteCarloCalibration } from '../../../src/ui/montecarlo/mcCalibration';
+import { monteCarloCalibration } from '../../../src/compute/monteCarloCalibration';
 import { expectRelClose } from '../../helpers/expectClose';
 
 const table = (name: string) => readFileSync(`public/tables/${name}`, 'utf8');

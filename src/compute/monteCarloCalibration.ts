@@ -2,10 +2,11 @@
 // fluence is tied to MU by its own water calibration run scaled by the reference dose rate and
 // the collimator-scatter factor S_c of the water data the page uses for the other methods
 // (the modelled beam, or the measured table carried in the case), so all curves share one scale.
-import { equivalentSquareCm } from '../../engine/beam/geometry';
-import { modelledWaterData } from '../../engine/beam/modelledBeam';
-import { waterDataForCase } from '../../compute/typeAForCase';
-import type { LaminaCase } from '../../io/caseSchema';
+// Runs in the compute worker (where the water data is); the page asks it through computeApi.
+import { equivalentSquareCm } from '../engine/beam/geometry';
+import { modelledWaterData } from '../engine/beam/modelledBeam';
+import { waterDataForCase } from './typeAForCase';
+import type { LaminaCase } from '../io/caseSchema';
 
 export interface McCalibration {
   referenceDosePerMuCGy: number;
