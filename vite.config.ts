@@ -16,6 +16,7 @@ export default defineConfig({
       'tests/property/**/*.test.ts',
     ],
     environment: 'node',
+    setupFiles: ['tests/setup/generatedData.ts'],
     testTimeout: 60_000,
   },
 });

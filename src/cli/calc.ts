@@ -1,6 +1,7 @@
 // `npm run calc -- <case.json> [--json] [--methods id,id,…]`: the same engine as the page, in Node.
 import { readFileSync } from 'node:fs';
 import { describeProblems } from '../io/caseFile';
+import { loadGeneratedDataFromDisk } from '../io/generatedDataNode';
 import { parseArgs } from './args';
 import { runBatch } from './batch';
 import { calculateDocument, jsonOf, loadDocument, planOptionsOf, textOf } from './checkCommand';
@@ -19,6 +20,7 @@ ${WATER_TABLE_USAGE}
 ${MC_USAGE}`;
 
 function main(argv: string[]): number {
+  loadGeneratedDataFromDisk();
   let args;
   try {
     args = parseArgs(argv);
