@@ -66,6 +66,28 @@ export function encodeTypedArrayFile(document: unknown): Uint8Array {
   return out;
 }
 
+const LITTLE_ENDIAN_HOST = new Uint8Array(new Uint16Array([1]).buffer)[0] === 1;
+
+/** One stored array as a typed array of its own (a copy: the file's bytes may be reused). */
+function readArray(
+  bytes: Uint8Array,
+  view: DataView,
+  at: number,
+  a: ArrayDescriptor,
+): Float32Array | Float64Array {
+  const size = BYTES[a.type];
+  if (LITTLE_ENDIAN_HOST) {
+    // Uint8Array's slice copies (a Node Buffer's own slice would not).
+    const copy = Uint8Array.prototype.slice.call(bytes, at, at + a.length * size).buffer;
+    return a.type === 'float32' ? new Float32Array(copy) : new Float64Array(copy);
+  }
+  const out = a.type === 'float32' ? new Float32Array(a.length) : new Float64Array(a.length);
+  for (let k = 0; k < a.length; k++)
+    out[k] =
+      a.type === 'float32' ? view.getFloat32(at + 4 * k, true) : view.getFloat64(at + 8 * k, true);
+  return out;
+}
+
 /** The document of a typed-array file, with its typed arrays restored; throws on a damaged file. */
 export function decodeTypedArrayFile(bytes: Uint8Array, name = 'typed-array file'): unknown {
   const fail = (why: string): never => {
@@ -91,14 +113,7 @@ export function decodeTypedArrayFile(bytes: Uint8Array, name = 'typed-array file
     const at = dataStart + a.offset;
     if (!(Number.isInteger(a.length) && a.length >= 0) || at + a.length * size > bytes.length)
       fail(`array ${i}: runs past the end of the file`);
-    if (a.type === 'float32') {
-      const out = new Float32Array(a.length);
-      for (let k = 0; k < a.length; k++) out[k] = view.getFloat32(at + 4 * k, true);
-      return out;
-    }
-    const out = new Float64Array(a.length);
-    for (let k = 0; k < a.length; k++) out[k] = view.getFloat64(at + 8 * k, true);
-    return out;
+    return readArray(bytes, view, at, a);
   });
   const restore = (value: unknown): unknown => {
     if (Array.isArray(value)) return value.map(restore);

@@ -50,6 +50,8 @@ describe('encodeTypedArrayFile / decodeTypedArrayFile', () => {
     const shifted = new Uint8Array(bytes.length + 3);
     shifted.set(bytes, 3);
     expect(decodeTypedArrayFile(shifted.subarray(3))).toEqual(doc);
+    // A small Node Buffer shares a larger pooled ArrayBuffer: the arrays must not see the rest.
+    expect(decodeTypedArrayFile(Buffer.from(bytes))).toEqual(doc);
   });
 
   it('names the file and the problem for damaged input', () => {
