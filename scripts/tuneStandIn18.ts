@@ -19,12 +19,13 @@ import { polyenergeticKernel } from '../src/engine/kernels/polyenergeticKernel';
 import { cylinderCumulative } from '../src/engine/kernels/cylinderCumulative';
 import { quadrantTable } from '../src/engine/kernels/quadrant';
 import { monoKernelsOfFile, type MonoKernelFile } from '../src/engine/kernels/kernelFiles';
+import { readTypedArrayFileSync } from '../src/io/generatedDataNode';
 import { superpositionDose } from '../src/engine/superposition/slabSuperposition';
 import { maximumOnGrid, REFERENCE_SEARCH_DEPTHS_CM } from '../src/engine/superposition/typeBDose';
 import { depthOfMaximum } from '../src/engine/montecarlo/depthDose';
 
 const SPECTRA_PATH = 'src/engine/data/spectra.json';
-const MONO_PATH = 'src/engine/data/generated/pointKernelsMono.json';
+const MONO_PATH = 'src/engine/data/generated/pointKernelsMono.bin';
 const MC_PATH = 'tests/fixtures/mcWaterDepthDose.json';
 const TARGET_PDD10 = 79.0;
 /** β is stored to 1e-4 /MeV; PDD(10) changes by ≈ 0.004 % points per 1e-4 /MeV here. */
@@ -42,7 +43,7 @@ interface Indices {
   meanEnergyMeV: number;
 }
 
-const kernels = monoKernelsOfFile(JSON.parse(readFileSync(MONO_PATH, 'utf8')) as MonoKernelFile);
+const kernels = monoKernelsOfFile(readTypedArrayFileSync(MONO_PATH) as MonoKernelFile);
 const stored = storedSpectrumBins('18MV');
 const beam = { ssdCm: 100, fieldXCm: 10, fieldYCm: 10 };
 

@@ -3,6 +3,7 @@
 import { readFileSync } from 'node:fs';
 import { describeProblems } from '../io/caseFile';
 import { PLAN_FORMAT } from '../io/planSchema';
+import { loadGeneratedDataFromDisk } from '../io/generatedDataNode';
 import { parseArgs } from './args';
 import { runBatch, runJsonLines } from './batch';
 import {
@@ -35,6 +36,7 @@ ${WATER_TABLE_USAGE}
 ${MC_USAGE}`;
 
 function main(argv: string[]): number {
+  loadGeneratedDataFromDisk();
   let args;
   try {
     args = parseArgs(argv);

@@ -8,8 +8,7 @@ import { checkStatements, type CheckStatements } from '../io/report/verdictState
 type DocumentCheck = PlanReport['check'] & { statements: CheckStatements };
 
 export type CalcDocument =
-  | (CalcReport & { check: DocumentCheck })
-  | (Omit<PlanReport, 'check'> & { check: DocumentCheck });
+  (CalcReport & { check: DocumentCheck }) | (Omit<PlanReport, 'check'> & { check: DocumentCheck });
 
 export function calcDocumentOf(result: PlanReport, isPlan: boolean): CalcDocument {
   const check = { ...result.check, statements: checkStatements(result.check) };

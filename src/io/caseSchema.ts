@@ -2,7 +2,9 @@
 // phantom, the points of interest on its central axis, the planning system's values to compare
 // with (the beam's MU, the dose at each point) and the check's settings. Every rule here names
 // its field. Version 2 moved the planning MU from the points to the beam (caseMigrations.ts).
-import { z } from 'zod';
+// zod/mini (the tree-shakable form of zod: same checks and messages) keeps the page's entry small.
+import * as z from 'zod/mini';
+import './zodEnglish';
 import { caseCheckSchema } from './checkSettingsSchema';
 import { BEAM_ENERGIES } from '../engine/beam/energies';
 import { MATERIAL_IDS } from '../engine/materials/materialLibrary';
@@ -30,41 +32,48 @@ export const LIMITS = {
 } as const;
 
 const finite = (what: string) =>
-  z.number({ error: `${what} must be a number` }).refine(Number.isFinite, `${what} must be finite`);
+  z
+    .number({ error: `${what} must be a number` })
+    .check(z.refine(Number.isFinite, `${what} must be finite`));
 
 export const layerSchema = z.strictObject({
   materialId: z.enum(MATERIAL_IDS, {
     error: `unknown material (expected one of ${MATERIAL_IDS.join(', ')})`,
   }),
-  thicknessCm: finite('thickness')
-    .refine((v) => v > 0, 'thickness must be > 0 cm')
-    .refine(
+  thicknessCm: finite('thickness').check(
+    z.refine((v) => v > 0, 'thickness must be > 0 cm'),
+    z.refine(
       (v) => v >= LIMITS.minLayerThicknessCm,
       `thickness must be ≥ ${LIMITS.minLayerThicknessCm} cm`,
-    )
-    .refine(
+    ),
+    z.refine(
       (v) => v <= LIMITS.maxLayerThicknessCm,
       `thickness must be ≤ ${LIMITS.maxLayerThicknessCm} cm`,
     ),
-  densityGPerCm3: finite('density')
-    .refine((v) => v > 0, 'density must be > 0 g/cm³')
-    .refine(
-      (v) => v <= LIMITS.maxDensityGPerCm3,
-      `density must be ≤ ${LIMITS.maxDensityGPerCm3} g/cm³`,
-    )
-    .optional(),
-  label: z.string().max(80, 'label must be at most 80 characters').optional(),
+  ),
+  densityGPerCm3: z.optional(
+    finite('density').check(
+      z.refine((v) => v > 0, 'density must be > 0 g/cm³'),
+      z.refine(
+        (v) => v <= LIMITS.maxDensityGPerCm3,
+        `density must be ≤ ${LIMITS.maxDensityGPerCm3} g/cm³`,
+      ),
+    ),
+  ),
+  label: z.optional(z.string().check(z.maxLength(80, 'label must be at most 80 characters'))),
 });
 
 const distance = (what: string) =>
-  finite(what)
-    .refine((v) => v >= LIMITS.minDistanceCm, `${what} must be ≥ ${LIMITS.minDistanceCm} cm`)
-    .refine((v) => v <= LIMITS.maxDistanceCm, `${what} must be ≤ ${LIMITS.maxDistanceCm} cm`);
+  finite(what).check(
+    z.refine((v) => v >= LIMITS.minDistanceCm, `${what} must be ≥ ${LIMITS.minDistanceCm} cm`),
+    z.refine((v) => v <= LIMITS.maxDistanceCm, `${what} must be ≤ ${LIMITS.maxDistanceCm} cm`),
+  );
 
 const field = (what: string) =>
-  finite(what)
-    .refine((v) => v >= LIMITS.minFieldCm, `${what} must be ≥ ${LIMITS.minFieldCm} cm`)
-    .refine((v) => v <= LIMITS.maxFieldCm, `${what} must be ≤ ${LIMITS.maxFieldCm} cm`);
+  finite(what).check(
+    z.refine((v) => v >= LIMITS.minFieldCm, `${what} must be ≥ ${LIMITS.minFieldCm} cm`),
+    z.refine((v) => v <= LIMITS.maxFieldCm, `${what} must be ≤ ${LIMITS.maxFieldCm} cm`),
+  );
 
 export const setupSchema = z.discriminatedUnion(
   'kind',
@@ -73,9 +82,8 @@ export const setupSchema = z.discriminatedUnion(
     z.strictObject({
       kind: z.literal('SAD'),
       sadCm: distance('SAD'),
-      isocentreDepthCm: finite('isocentre depth').refine(
-        (v) => v >= 0,
-        'isocentre depth must be ≥ 0 cm',
+      isocentreDepthCm: finite('isocentre depth').check(
+        z.refine((v) => v >= 0, 'isocentre depth must be ≥ 0 cm'),
       ),
     }),
   ],
@@ -95,22 +103,26 @@ export const beamSchema = z.strictObject({
    * Monitor units the planning system gives this beam, for comparison. One value per beam: every
    * point of the case is checked against it.
    */
-  planningMu: finite('planning MU')
-    .refine((v) => v > 0, 'planning MU must be > 0')
-    .optional(),
+  planningMu: z.optional(
+    finite('planning MU').check(z.refine((v) => v > 0, 'planning MU must be > 0')),
+  ),
 });
 
 export const pointSchema = z.strictObject({
   id: z
     .string({ error: 'point id must be text' })
-    .min(1, 'point id must not be empty')
-    .max(40, 'point id must be at most 40 characters'),
-  depthCm: finite('depth').refine((v) => v >= 0, 'depth must be ≥ 0 cm'),
+    .check(
+      z.minLength(1, 'point id must not be empty'),
+      z.maxLength(40, 'point id must be at most 40 characters'),
+    ),
+  depthCm: finite('depth').check(z.refine((v) => v >= 0, 'depth must be ≥ 0 cm')),
   /** Dose per fraction from the planning system at this point from this beam (cGy), for comparison. */
-  planningDoseCGy: finite('planning dose')
-    .refine((v) => v >= 0, 'planning dose must be ≥ 0 cGy')
-    .refine((v) => v === 0 || v >= 0.001, 'planning dose must be 0 (none) or ≥ 0.001 cGy')
-    .optional(),
+  planningDoseCGy: z.optional(
+    finite('planning dose').check(
+      z.refine((v) => v >= 0, 'planning dose must be ≥ 0 cGy'),
+      z.refine((v) => v === 0 || v >= 0.001, 'planning dose must be 0 (none) or ≥ 0.001 cGy'),
+    ),
+  ),
 });
 
 /**
@@ -123,112 +135,126 @@ export const waterDataSchema = z
     kind: z.enum(['tmr', 'pdd'], { error: 'water data kind must be "tmr" or "pdd"' }),
     fileName: z
       .string({ error: 'file name must be text' })
-      .min(1, 'file name must not be empty')
-      .max(200),
+      .check(z.minLength(1, 'file name must not be empty'), z.maxLength(200)),
     csv: z
       .string({ error: 'csv must be text' })
-      .min(1, 'csv must not be empty')
-      .max(500_000, 'csv must be at most 500 000 characters'),
-    ssdCm: distance('table SSD').optional(),
-    dMaxCm: finite('d_max')
-      .refine((v) => v > 0 && v < 10, 'd_max must lie in (0, 10) cm')
-      .optional(),
-    scatterFileName: z.string().min(1).max(200).optional(),
-    scatterCsv: z
-      .string()
-      .max(100_000, 'scatter csv must be at most 100 000 characters')
-      .optional(),
-    referenceDosePerMuCGy: finite('reference dose rate')
-      .refine((v) => v > 0 && v <= 10, 'reference dose rate must lie in (0, 10] cGy/MU')
-      .optional(),
+      .check(
+        z.minLength(1, 'csv must not be empty'),
+        z.maxLength(500_000, 'csv must be at most 500 000 characters'),
+      ),
+    ssdCm: z.optional(distance('table SSD')),
+    dMaxCm: z.optional(
+      finite('d_max').check(z.refine((v) => v > 0 && v < 10, 'd_max must lie in (0, 10) cm')),
+    ),
+    scatterFileName: z.optional(z.string().check(z.minLength(1), z.maxLength(200))),
+    scatterCsv: z.optional(
+      z.string().check(z.maxLength(100_000, 'scatter csv must be at most 100 000 characters')),
+    ),
+    referenceDosePerMuCGy: z.optional(
+      finite('reference dose rate').check(
+        z.refine((v) => v > 0 && v <= 10, 'reference dose rate must lie in (0, 10] cGy/MU'),
+      ),
+    ),
   })
-  .superRefine((w, ctx) => {
-    if (w.kind === 'pdd' && w.ssdCm === undefined) {
-      ctx.addIssue({ code: 'custom', path: ['ssdCm'], message: 'a PDD table needs its SSD (cm)' });
-      return;
-    }
-    const built = buildMeasuredWaterData(w);
-    if (!built.ok)
-      for (const message of built.problems)
+  .check(
+    z.superRefine((w, ctx) => {
+      if (w.kind === 'pdd' && w.ssdCm === undefined) {
         ctx.addIssue({
           code: 'custom',
-          path: [
-            message.startsWith(`${w.scatterFileName ?? 'scatter factors'}: `)
-              ? 'scatterCsv'
-              : 'csv',
-          ],
-          message,
+          path: ['ssdCm'],
+          message: 'a PDD table needs its SSD (cm)',
         });
-  });
+        return;
+      }
+      const built = buildMeasuredWaterData(w);
+      if (!built.ok)
+        for (const message of built.problems)
+          ctx.addIssue({
+            code: 'custom',
+            path: [
+              message.startsWith(`${w.scatterFileName ?? 'scatter factors'}: `)
+                ? 'scatterCsv'
+                : 'csv',
+            ],
+            message,
+          });
+    }),
+  );
 
 export const caseSchema = z
   .strictObject({
     format: z.literal(CASE_FORMAT, { error: `format must be "${CASE_FORMAT}"` }),
     version: z.literal(CASE_VERSION, { error: `version must be ${CASE_VERSION}` }),
-    name: z.string({ error: 'name must be text' }).max(200, 'name must be at most 200 characters'),
-    notes: z.string().max(5000, 'notes must be at most 5000 characters').optional(),
+    name: z
+      .string({ error: 'name must be text' })
+      .check(z.maxLength(200, 'name must be at most 200 characters')),
+    notes: z.optional(z.string().check(z.maxLength(5000, 'notes must be at most 5000 characters'))),
     beam: beamSchema,
     layers: z
       .array(layerSchema, { error: 'layers must be a list' })
-      .min(1, 'layers: at least one layer is needed')
-      .max(LIMITS.maxLayers, `layers: at most ${LIMITS.maxLayers} layers`),
+      .check(
+        z.minLength(1, 'layers: at least one layer is needed'),
+        z.maxLength(LIMITS.maxLayers, `layers: at most ${LIMITS.maxLayers} layers`),
+      ),
     points: z
       .array(pointSchema, { error: 'points must be a list' })
-      .max(LIMITS.maxPoints, `points: at most ${LIMITS.maxPoints} points`),
+      .check(z.maxLength(LIMITS.maxPoints, `points: at most ${LIMITS.maxPoints} points`)),
     /** Measured water data (optional; type-A methods need water data). */
-    waterData: waterDataSchema.optional(),
+    waterData: z.optional(waterDataSchema),
     /** The check's settings saved with the case (prescription, tolerances, method, dose convention). */
-    check: caseCheckSchema.optional(),
+    check: z.optional(caseCheckSchema),
   })
-  .superRefine((c, ctx) => {
-    const total = c.layers.reduce((s, l) => s + l.thicknessCm, 0);
-    if (total > LIMITS.maxPhantomThicknessCm + 1e-9)
-      ctx.addIssue({
-        code: 'custom',
-        path: ['layers'],
-        message: `total thickness ${total.toFixed(2)} cm exceeds ${LIMITS.maxPhantomThicknessCm} cm`,
+  .check(
+    z.superRefine((c, ctx) => {
+      const total = c.layers.reduce((s, l) => s + l.thicknessCm, 0);
+      if (total > LIMITS.maxPhantomThicknessCm + 1e-9)
+        ctx.addIssue({
+          code: 'custom',
+          path: ['layers'],
+          message: `total thickness ${total.toFixed(2)} cm exceeds ${LIMITS.maxPhantomThicknessCm} cm`,
+        });
+      c.points.forEach((p, i) => {
+        if (p.depthCm > total + 1e-9)
+          ctx.addIssue({
+            code: 'custom',
+            path: ['points', i, 'depthCm'],
+            message: `depth ${p.depthCm} cm is outside the phantom (0–${total.toFixed(2)} cm)`,
+          });
       });
-    c.points.forEach((p, i) => {
-      if (p.depthCm > total + 1e-9)
-        ctx.addIssue({
-          code: 'custom',
-          path: ['points', i, 'depthCm'],
-          message: `depth ${p.depthCm} cm is outside the phantom (0–${total.toFixed(2)} cm)`,
-        });
-    });
-    const seen = new Set<string>();
-    c.points.forEach((p, i) => {
-      if (seen.has(p.id))
-        ctx.addIssue({
-          code: 'custom',
-          path: ['points', i, 'id'],
-          message: `duplicate point id "${p.id}"`,
-        });
-      seen.add(p.id);
-    });
-    const rx = c.check?.prescription;
-    if (rx && !c.points.some((p) => p.id === rx.pointId))
-      ctx.addIssue({
-        code: 'custom',
-        path: ['check', 'prescription', 'pointId'],
-        message: `no point "${rx.pointId}" in this case`,
+      const seen = new Set<string>();
+      c.points.forEach((p, i) => {
+        if (seen.has(p.id))
+          ctx.addIssue({
+            code: 'custom',
+            path: ['points', i, 'id'],
+            message: `duplicate point id "${p.id}"`,
+          });
+        seen.add(p.id);
       });
-    if (c.beam.setup.kind === 'SAD') {
-      const { sadCm, isocentreDepthCm } = c.beam.setup;
-      if (isocentreDepthCm > total + 1e-9)
+      const rx = c.check?.prescription;
+      if (rx && !c.points.some((p) => p.id === rx.pointId))
         ctx.addIssue({
           code: 'custom',
-          path: ['beam', 'setup', 'isocentreDepthCm'],
-          message: `isocentre depth ${isocentreDepthCm} cm is outside the phantom (0–${total.toFixed(2)} cm)`,
+          path: ['check', 'prescription', 'pointId'],
+          message: `no point "${rx.pointId}" in this case`,
         });
-      if (sadCm - isocentreDepthCm < LIMITS.minDistanceCm)
-        ctx.addIssue({
-          code: 'custom',
-          path: ['beam', 'setup', 'isocentreDepthCm'],
-          message: `SAD minus isocentre depth gives an SSD below ${LIMITS.minDistanceCm} cm`,
-        });
-    }
-  });
+      if (c.beam.setup.kind === 'SAD') {
+        const { sadCm, isocentreDepthCm } = c.beam.setup;
+        if (isocentreDepthCm > total + 1e-9)
+          ctx.addIssue({
+            code: 'custom',
+            path: ['beam', 'setup', 'isocentreDepthCm'],
+            message: `isocentre depth ${isocentreDepthCm} cm is outside the phantom (0–${total.toFixed(2)} cm)`,
+          });
+        if (sadCm - isocentreDepthCm < LIMITS.minDistanceCm)
+          ctx.addIssue({
+            code: 'custom',
+            path: ['beam', 'setup', 'isocentreDepthCm'],
+            message: `SAD minus isocentre depth gives an SSD below ${LIMITS.minDistanceCm} cm`,
+          });
+      }
+    }),
+  );
 
 export type LaminaCase = z.infer<typeof caseSchema>;
 export type CaseLayer = z.infer<typeof layerSchema>;

@@ -5,7 +5,9 @@
 // block is not read inside a plan). Points are matched by id across beams. A single-beam case
 // file stays valid on its own and lifts into a one-beam plan with its settings.
 // Version 2 added `doseTo`; its beams' cases are case version 2 (version-1 plans still read).
-import { z } from 'zod';
+// zod/mini (the tree-shakable form of zod: same checks and messages) keeps the page's entry small.
+import * as z from 'zod/mini';
+import './zodEnglish';
 import {
   checkMethodIdSchema,
   doseToSchema,
@@ -21,15 +23,19 @@ export const PLAN_VERSION = 2;
 export const MAX_BEAMS = 12;
 
 const finite = (what: string) =>
-  z.number({ error: `${what} must be a number` }).refine(Number.isFinite, `${what} must be finite`);
+  z
+    .number({ error: `${what} must be a number` })
+    .check(z.refine(Number.isFinite, `${what} must be finite`));
 
 export const planBeamShellSchema = z.strictObject({
   id: z
     .string({ error: 'beam id must be text' })
-    .min(1, 'beam id must not be empty')
-    .max(40, 'beam id must be at most 40 characters'),
-  label: z.string().max(80, 'label must be at most 80 characters').optional(),
-  weight: finite('weight').refine((v) => v >= 0, 'weight must be ≥ 0'),
+    .check(
+      z.minLength(1, 'beam id must not be empty'),
+      z.maxLength(40, 'beam id must be at most 40 characters'),
+    ),
+  label: z.optional(z.string().check(z.maxLength(80, 'label must be at most 80 characters'))),
+  weight: finite('weight').check(z.refine((v) => v >= 0, 'weight must be ≥ 0')),
   /** A complete single-beam case document ("lamina.case"), validated by the case rules. */
   case: z.unknown(),
 });
@@ -40,36 +46,42 @@ export const planShellSchema = z
     version: z.union([z.literal(1), z.literal(PLAN_VERSION)], {
       error: `version must be 1 or ${PLAN_VERSION}`,
     }),
-    name: z.string({ error: 'name must be text' }).max(200, 'name must be at most 200 characters'),
-    notes: z.string().max(5000, 'notes must be at most 5000 characters').optional(),
+    name: z
+      .string({ error: 'name must be text' })
+      .check(z.maxLength(200, 'name must be at most 200 characters')),
+    notes: z.optional(z.string().check(z.maxLength(5000, 'notes must be at most 5000 characters'))),
     beams: z
       .array(planBeamShellSchema, { error: 'beams must be a list' })
-      .min(1, 'beams: at least one beam is needed')
-      .max(MAX_BEAMS, `beams: at most ${MAX_BEAMS} beams`),
-    prescription: prescriptionSchema.optional(),
-    tolerances: tolerancesSchema.optional(),
+      .check(
+        z.minLength(1, 'beams: at least one beam is needed'),
+        z.maxLength(MAX_BEAMS, `beams: at most ${MAX_BEAMS} beams`),
+      ),
+    prescription: z.optional(prescriptionSchema),
+    tolerances: z.optional(tolerancesSchema),
     /** Method whose verdict decides the check (the default for the path when absent). */
-    checkMethodId: checkMethodIdSchema.optional(),
+    checkMethodId: z.optional(checkMethodIdSchema),
     /** Dose to water or dose to medium for every method and beam (water when absent). */
-    doseTo: doseToSchema.optional(),
+    doseTo: z.optional(doseToSchema),
   })
-  .superRefine((p, ctx) => {
-    const seen = new Set<string>();
-    p.beams.forEach((b, i) => {
-      if (seen.has(b.id))
+  .check(
+    z.superRefine((p, ctx) => {
+      const seen = new Set<string>();
+      p.beams.forEach((b, i) => {
+        if (seen.has(b.id))
+          ctx.addIssue({
+            code: 'custom',
+            path: ['beams', i, 'id'],
+            message: `duplicate beam id "${b.id}"`,
+          });
+        seen.add(b.id);
+      });
+      if (p.beams.every((b) => b.weight === 0))
         ctx.addIssue({
           code: 'custom',
-          path: ['beams', i, 'id'],
-          message: `duplicate beam id "${b.id}"`,
+          path: ['beams'],
+          message: 'at least one beam needs a weight > 0',
         });
-      seen.add(b.id);
-    });
-    if (p.beams.every((b) => b.weight === 0))
-      ctx.addIssue({
-        code: 'custom',
-        path: ['beams'],
-        message: 'at least one beam needs a weight > 0',
-      });
-  });
+    }),
+  );
 
 export type PlanShell = z.infer<typeof planShellSchema>;

@@ -19,20 +19,24 @@ const GL_W = [
 /** Sub-intervals per side of the diagonal, clustered towards the corner direction φ*. */
 const PANELS = 3;
 
+/** Samples of the azimuthal quadrature of one quadrant: 2 sides × PANELS × 8 Gauss points. */
+export const QUADRANT_SAMPLES = 2 * PANELS * GL_X.length;
+
 /**
- * Azimuthal quadrature: (1/2π)·∫₀^{π/2} F(min(U/cos φ, V/sin φ)) dφ, for U, V ≥ 0. Composite
- * Gauss–Legendre, panels clustered quadratically towards the corner direction φ* = atan(V/U),
- * where s_max changes fastest (thin rectangles).
+ * The azimuthal quadrature's samples for U, V > 0: radii s_k (cm) and weights c_k such that
+ * quadrant = (1/2π)·Σ c_k·F(s_k), summed in index order. Composite Gauss–Legendre, panels
+ * clustered quadratically towards the corner direction φ* = atan(V/U), where s_max changes
+ * fastest (thin rectangles).
  */
-export function quadrantFromRadial(
-  radialCumulative: (sCm: number) => number,
+export function quadrantSamples(
   uCm: number,
   vCm: number,
-): number {
-  if (uCm <= 0 || vCm <= 0) return 0;
+  radiusCm: Float64Array,
+  weight: Float64Array,
+): void {
   const split = Math.atan2(vCm, uCm);
   const rest = 0.5 * Math.PI - split;
-  let sum = 0;
+  let n = 0;
   for (let p = 0; p < PANELS; p++) {
     // Panel p covers fractions [f0, f1] of each side's width, measured away from φ*.
     const f0 = (p / PANELS) ** 2;
@@ -43,11 +47,30 @@ export function quadrantFromRadial(
       const w = GL_W[k] as number;
       const x = GL_X[k] as number;
       const phi1 = split - split * f0 - h1 * (1 + x);
-      sum += w * h1 * radialCumulative(uCm / Math.cos(phi1));
+      radiusCm[n] = uCm / Math.cos(phi1);
+      weight[n++] = w * h1;
       const phi2 = split + rest * f0 + h2 * (1 + x);
-      sum += w * h2 * radialCumulative(vCm / Math.sin(phi2));
+      radiusCm[n] = vCm / Math.sin(phi2);
+      weight[n++] = w * h2;
     }
   }
+}
+
+// Scratch for quadrantFromRadial (F is a plain radial look-up: it never re-enters this module).
+const sampleRadiusCm = new Float64Array(QUADRANT_SAMPLES);
+const sampleWeight = new Float64Array(QUADRANT_SAMPLES);
+
+/** Azimuthal quadrature: (1/2π)·∫₀^{π/2} F(min(U/cos φ, V/sin φ)) dφ, for U, V ≥ 0. */
+export function quadrantFromRadial(
+  radialCumulative: (sCm: number) => number,
+  uCm: number,
+  vCm: number,
+): number {
+  if (uCm <= 0 || vCm <= 0) return 0;
+  quadrantSamples(uCm, vCm, sampleRadiusCm, sampleWeight);
+  let sum = 0;
+  for (let k = 0; k < QUADRANT_SAMPLES; k++)
+    sum += (sampleWeight[k] as number) * radialCumulative(sampleRadiusCm[k] as number);
   return sum / (2 * Math.PI);
 }
 
@@ -98,22 +121,44 @@ export function quadrantTable(q: CylinderCumulative, lateralSteps = 44): Quadran
   const nZ = q.zeta.nodes.length;
   const values = new Float64Array(nZ * nL * nL);
   const nS = q.radius.nodes.length;
+  // The quadrature's radii are the same for every ζ row: their radial-grid cells and weights are
+  // found once per (U, V) pair, then each row is a weighted sum of its nodes (the same arithmetic,
+  // in the same order, as quadrantFromRadial over the row).
+  const pairs = ((nL - 1) * nL) / 2;
+  const cell = new Int32Array(pairs * QUADRANT_SAMPLES);
+  const frac = new Float64Array(pairs * QUADRANT_SAMPLES);
+  const weight = new Float64Array(pairs * QUADRANT_SAMPLES);
+  const radii = new Float64Array(QUADRANT_SAMPLES);
+  const w = new Float64Array(QUADRANT_SAMPLES);
+  let pair = 0;
+  for (let iu = 1; iu < nL; iu++)
+    for (let iv = 1; iv <= iu; iv++, pair++) {
+      const base = pair * QUADRANT_SAMPLES;
+      quadrantSamples(lateral.nodes[iu] as number, lateral.nodes[iv] as number, radii, w);
+      weight.set(w, base);
+      for (let k = 0; k < QUADRANT_SAMPLES; k++) {
+        const p = q.radius.position(radii[k] as number);
+        const i = Math.min(Math.floor(p), nS - 2);
+        cell[base + k] = i;
+        frac[base + k] = p - i;
+      }
+    }
+  const twoPi = 2 * Math.PI;
   for (let iz = 0; iz < nZ; iz++) {
     // ζ is a node of the cylinder table: interpolate in radius only, along its row.
-    const row = q.values.subarray(iz * nS, (iz + 1) * nS);
-    const radial = (s: number): number => {
-      const p = q.radius.position(s);
-      const i = Math.min(Math.floor(p), nS - 2);
-      const t = p - i;
-      return (1 - t) * (row[i] as number) + t * (row[i + 1] as number);
-    };
+    const row = iz * nS;
+    const qv = q.values;
+    pair = 0;
     for (let iu = 1; iu < nL; iu++) {
-      for (let iv = 1; iv <= iu; iv++) {
-        const c = quadrantFromRadial(
-          radial,
-          lateral.nodes[iu] as number,
-          lateral.nodes[iv] as number,
-        );
+      for (let iv = 1; iv <= iu; iv++, pair++) {
+        let sum = 0;
+        const end = (pair + 1) * QUADRANT_SAMPLES;
+        for (let k = pair * QUADRANT_SAMPLES; k < end; k++) {
+          const i = row + (cell[k] as number);
+          const t = frac[k] as number;
+          sum += (weight[k] as number) * ((1 - t) * (qv[i] as number) + t * (qv[i + 1] as number));
+        }
+        const c = sum / twoPi;
         values[(iz * nL + iu) * nL + iv] = c;
         values[(iz * nL + iv) * nL + iu] = c;
       }

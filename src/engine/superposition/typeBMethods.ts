@@ -3,7 +3,7 @@
 import type { BeamEnergy } from '../beam/energies';
 import type { MethodResult } from '../methodResult';
 import { radiologicalDepthCm, waterPhantom, type SlabPhantom } from '../phantom/slabPhantom';
-import { KERNEL_FORMAT_DATE_OF_DATA, typeBModel } from './beamModel';
+import { kernelFormatDate, typeBModel } from './beamModel';
 import { typeBDosePerMu, referencePoint, type TypeBEngine } from './typeBDose';
 import type { SlabBeam } from './slabSuperposition';
 import { depthConversionFactors, nativeDoseQuantity } from '../dose/doseConversion';
@@ -31,7 +31,7 @@ const VARIANTS: Record<TypeBEngine, string> = {
 
 /** The water-data string printed with type-B results. */
 export function modelledBeamSource(energy: BeamEnergy): string {
-  return `modelled beam (${energy}, generated ${KERNEL_FORMAT_DATE_OF_DATA})`;
+  return `modelled beam (${energy}, generated ${kernelFormatDate()})`;
 }
 
 function pointFlags(engine: TypeBEngine, input: TypeBInput, depthCm: number, dMaxCm: number) {

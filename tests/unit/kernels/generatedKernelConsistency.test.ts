@@ -2,7 +2,7 @@
 // monoenergetic kernels weighted by the spectra, and the stored pencil kernels follow from the
 // beam kernels. Guards against one file being regenerated without the others.
 import { describe, expect, it } from 'vitest';
-import monoJson from '../../../src/engine/data/generated/pointKernelsMono.json';
+import { readTypedArrayFileSync } from '../../../src/io/generatedDataNode';
 import type { MonoKernelFile } from '../../../src/engine/kernels/kernelFiles';
 import { PENCIL_RADII_CM } from '../../../src/engine/kernels/kernelFiles';
 import {
@@ -15,7 +15,9 @@ import { beamPencilKernel, beamPointKernel } from '../../../src/engine/superposi
 import { buildPencilKernel, pencilRadialAt } from '../../../src/engine/superposition/pencilKernel';
 import { expectRelClose } from '../../helpers/expectClose';
 
-const MONO = monoJson as unknown as MonoKernelFile;
+const MONO = readTypedArrayFileSync(
+  'src/engine/data/generated/pointKernelsMono.bin',
+) as MonoKernelFile;
 const mono: MonoKernel[] = MONO.kernels.map((k) => ({
   label: `${k.energyMeV} MeV`,
   energyMeV: k.energyMeV,
