@@ -29,6 +29,11 @@ export const LIMITS = {
    * rounding (1e-323 cm gave a non-finite superposition curve).
    */
   minLayerThicknessCm: 0.001,
+  /**
+   * Lowest layer density (g/cm³): a tenth of air's (0.0012); lower densities only carry rounding
+   * (5e-324 g/cm³ gave an infinite lateral electron range in the equilibrium warnings).
+   */
+  minDensityGPerCm3: 0.0001,
 } as const;
 
 const finite = (what: string) =>
@@ -54,6 +59,10 @@ export const layerSchema = z.strictObject({
   densityGPerCm3: z.optional(
     finite('density').check(
       z.refine((v) => v > 0, 'density must be > 0 g/cm³'),
+      z.refine(
+        (v) => v >= LIMITS.minDensityGPerCm3,
+        `density must be ≥ ${LIMITS.minDensityGPerCm3} g/cm³`,
+      ),
       z.refine(
         (v) => v <= LIMITS.maxDensityGPerCm3,
         `density must be ≤ ${LIMITS.maxDensityGPerCm3} g/cm³`,
