@@ -43,6 +43,15 @@ export interface BeamKernelFile extends Provenance {
         scatter: number[];
         escapedFraction: number;
         spectrumSource: string;
+        /** The kernel released behind `filtrationCm` of water (kernelHardening.ts). */
+        hardened: {
+          filtrationCm: number;
+          primary: number[];
+          scatter: number[];
+          escapedFraction: number;
+        };
+        /** f(t) of K(t) ≈ K(0) + f(t)·[K(t_ref) − K(0)]. */
+        hardening: { filtrationsCm: number[]; mixFractions: number[] };
       }
     >
   >;
@@ -51,7 +60,6 @@ export interface BeamKernelFile extends Provenance {
 export interface PencilKernelFile extends Provenance {
   format: 'lamina.pencilKernels';
   monoEnergiesMeV: number[];
-  referenceSsdCm: number;
   depthsCm: number[];
   radiiCm: number[];
   beams: Partial<Record<BeamEnergy, { values: number[] }>>;
