@@ -81,7 +81,7 @@ function simulateMono(histories: number, seed: number): MonoKernelFile {
       'src/engine/montecarlo/pointKernel.ts simulatePointKernel (forced first interaction at the centre of a 60 cm water sphere; default transport settings)',
     seed,
     historiesPerEnergy: histories,
-    note: 'Photon-only kernels (no contaminant electrons). Energy fraction of the incident photon per bin; index polar·nRadial + radial; polar bins equal in angle over 0–180° from the photon direction.',
+    note: 'Photon kernels (contaminant electrons are a separate model). Energy fraction of the incident photon per bin; index polar·nRadial + radial; polar bins equal in angle over 0–180° from the photon direction.',
     radialEdgesCm: RADIAL_EDGES_CM,
     polarBins: POLAR_BINS,
     kernels,

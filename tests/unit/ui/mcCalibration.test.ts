@@ -49,7 +49,7 @@ describe('monteCarloCalibration', () => {
     const cal = monteCarloCalibration(caseWith(20, false), 'modelled');
     // 20 cm is a tabulated field of the modelled data, which samples the same curve: only the
     // table's 5-digit rounding separates them.
-    expectRelClose(cal.collimatorScatterFactor, modelledHeadScatter(20), 1e-4);
+    expectRelClose(cal.collimatorScatterFactor, modelledHeadScatter('6MV', 20), 1e-4);
   });
 
   it("uses the case's table (its reference dose rate and S_c) when the page uses the table", () => {
