@@ -1,5 +1,5 @@
 // Fits the contaminant-electron term of the modelled beams (src/engine/beam/contaminantElectrons.ts)
-// to published build-up behaviour (npx tsx scripts/fitContaminantElectrons.ts [--write]):
+// to published build-up behaviour (npm run fit:contaminants [-- --write]):
 //  - c₁₀ per beam: the 10 × 10 surface dose (SSD 100) of the total (photon + electron) depth dose;
 //  - k of κ = k/E_max, one constant for all beams, by least squares on (a) the typical d_max of
 //    6, 10 and 18 MV, each weighted by the half-width of its typical range, and (b) the share of

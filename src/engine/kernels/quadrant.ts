@@ -56,6 +56,11 @@ export function quadrantQuadrature(
   }
 }
 
+// Scratch for quadrantFromRadial (the engine is single-threaded per worker; the radial function
+// it calls must not call it again).
+const SCRATCH_RADII = new Float64Array(QUADRANT_NODES);
+const SCRATCH_WEIGHTS = new Float64Array(QUADRANT_NODES);
+
 /** Azimuthal quadrature (1/2π)·∫₀^{π/2} F(min(U/cos φ, V/sin φ)) dφ, for U, V ≥ 0. */
 export function quadrantFromRadial(
   radialCumulative: (sCm: number) => number,
@@ -63,8 +68,8 @@ export function quadrantFromRadial(
   vCm: number,
 ): number {
   if (uCm <= 0 || vCm <= 0) return 0;
-  const radii = new Float64Array(QUADRANT_NODES);
-  const weights = new Float64Array(QUADRANT_NODES);
+  const radii = SCRATCH_RADII;
+  const weights = SCRATCH_WEIGHTS;
   quadrantQuadrature(uCm, vCm, radii, weights);
   let sum = 0;
   for (let k = 0; k < QUADRANT_NODES; k++)
