@@ -25,7 +25,23 @@ const conversions: Record<string, (d: Doc) => Doc> = {
     beams: Object.fromEntries(
       Object.entries(d.beams as Beams).map(([e, b]) => [
         e,
-        { ...b, weights: f32(b.weights), primary: f32(b.primary), scatter: f32(b.scatter) },
+        {
+          ...b,
+          weights: f32(b.weights),
+          primary: f32(b.primary),
+          scatter: f32(b.scatter),
+          // The hardened companion kernel (kernelHardening.ts): its bins as arrays, the rest
+          // (filtration, escaped fraction, the mixing fractions of `hardening`) as numbers.
+          ...(b.hardened
+            ? {
+                hardened: {
+                  ...(b.hardened as Doc),
+                  primary: f32((b.hardened as Doc).primary),
+                  scatter: f32((b.hardened as Doc).scatter),
+                },
+              }
+            : {}),
+        },
       ]),
     ),
   }),

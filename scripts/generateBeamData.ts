@@ -4,7 +4,7 @@
 // Reads the kernels written by scripts/generateKernels.ts; deterministic (no random numbers).
 import { loadGeneratedDataFromDisk, writeTypedArrayFileSync } from '../src/io/generatedDataNode';
 import { BEAM_ENERGIES } from '../src/engine/beam/energies';
-import { HEAD_SCATTER_MODEL } from '../src/engine/beam/headScatter';
+import { headScatterDescription } from '../src/engine/beam/headScatter';
 import { computeModelledBeamTables } from '../src/engine/beam/modelledBeamData';
 import { KERNEL_FORMAT_DATE, KERNEL_FORMAT_VERSION } from '../src/engine/kernels/kernelFiles';
 import { kernelProvenance } from '../src/engine/superposition/beamModel';
@@ -40,8 +40,8 @@ const file: ModelledBeamFile = {
   formatDate: KERNEL_FORMAT_DATE,
   generator: 'scripts/generateBeamData.ts',
   kernels: kernelProvenance(),
-  note: 'Superposition in water. PDD: SSD 100 cm, field at the surface. TMR: point at 100 cm from the source, field at the point. PSF = D(d_max, s)/D_primary(d_max) (primary kernel only); S_p = PSF/PSF(10); S_c: modelled head-scatter curve. Photon-only kernels: no contaminant electrons, so surface and build-up doses are too low and d_max lies deeper than in a clinical beam of the same quality.',
-  headScatterModel: HEAD_SCATTER_MODEL.description,
+  note: 'Superposition in water, photons from the kernels plus the contaminant-electron model (src/engine/data/contaminantElectrons.json). PDD: SSD 100 cm, field at the surface. TMR: point at 100 cm from the source, field at the point. PSF = D(d_max, s)/D_air with D_air the photon dose at the same point in a water mini-phantom of radius r_LCPE (Li et al. 1995); S_p = PSF/PSF(10); S_c: modelled head-scatter curve per energy.',
+  headScatterModel: headScatterDescription(),
   referenceDosePerMuCGy: 1,
   beams,
 };

@@ -3,7 +3,9 @@
 //     first interaction forced at the centre of a 60 cm water sphere, 48 polar bins of 3.75°,
 //     the classic radial edges 0.05 … 60 cm (Mackie et al., PMB 33, 1 (1988), bin layout),
 //     primary and scatter separate            → src/engine/data/generated/pointKernelsMono.bin
-//  2. polyenergetic point kernels per beam, weights w_E ∝ Φ_E·E·(μ/ρ)(E)
+//  2. polyenergetic point kernels per beam, weights w_E ∝ Φ_E·E·(μ/ρ)(E), with the kernel released
+//     behind 20 cm of water and the mixing fraction f(t) of their hardening with depth
+//     (src/engine/kernels/kernelHardening.ts)
 //                                             → src/engine/data/generated/beamKernels.bin
 //  3. pencil-beam kernels per beam (depth × radius, radial cumulative) from (2)
 //                                             → src/engine/data/generated/pencilKernels.bin
@@ -16,6 +18,12 @@ import { simulatePointKernel } from '../src/engine/montecarlo/pointKernel';
 import { BEAM_ENERGIES } from '../src/engine/beam/energies';
 import { beamSpectrum } from '../src/engine/kernels/spectrum';
 import { polyenergeticKernel, kernelWeights } from '../src/engine/kernels/polyenergeticKernel';
+import {
+  HARDENING_FILTRATIONS_CM,
+  HARDENING_REFERENCE_CM,
+  hardenedKernel,
+  hardeningMixFractions,
+} from '../src/engine/kernels/kernelHardening';
 import { cylinderCumulative } from '../src/engine/kernels/cylinderCumulative';
 import { buildPencilKernel } from '../src/engine/superposition/pencilKernel';
 import {
@@ -75,7 +83,7 @@ function simulateMono(histories: number, seed: number): MonoKernelFile {
       'src/engine/montecarlo/pointKernel.ts simulatePointKernel (forced first interaction at the centre of a 60 cm water sphere; default transport settings)',
     seed,
     historiesPerEnergy: histories,
-    note: 'Photon-only kernels (no contaminant electrons). Energy fraction of the incident photon per bin; index polar·nRadial + radial; polar bins equal in angle over 0–180° from the photon direction.',
+    note: 'Photon kernels (contaminant electrons are a separate model). Energy fraction of the incident photon per bin; index polar·nRadial + radial; polar bins equal in angle over 0–180° from the photon direction.',
     radialEdgesCm: RADIAL_EDGES_CM,
     polarBins: POLAR_BINS,
     kernels,
@@ -110,16 +118,33 @@ function main(): void {
   for (const energy of BEAM_ENERGIES) {
     const spectrum = beamSpectrum(energy);
     const poly = polyenergeticKernel(kernels, spectrum, energy);
+    const hard = hardenedKernel(kernels, spectrum, energy);
+    const mixFractions = hardeningMixFractions(kernels, spectrum);
     beams[energy] = {
       weights: round(kernelWeights(kernels, spectrum), 6),
       primary: round(poly.primary),
       scatter: round(poly.scatter),
       escapedFraction: Number(poly.escapedFraction.toPrecision(6)),
       spectrumSource: spectrum.source,
+      hardened: {
+        filtrationCm: HARDENING_REFERENCE_CM,
+        primary: round(hard.primary),
+        scatter: round(hard.scatter),
+        escapedFraction: Number(hard.escapedFraction.toPrecision(6)),
+      },
+      hardening: {
+        filtrationsCm: [...HARDENING_FILTRATIONS_CM],
+        mixFractions: mixFractions.map((f) => Number(f.toPrecision(5))),
+      },
     };
     const t0 = performance.now();
-    const q = cylinderCumulative(poly, 'total');
-    const pencil = buildPencilKernel(q, spectrum, PENCIL_DEPTHS_CM, PENCIL_RADII_CM);
+    const pencil = buildPencilKernel(
+      { base: cylinderCumulative(poly, 'total'), hardened: cylinderCumulative(hard, 'total') },
+      { filtrationsCm: HARDENING_FILTRATIONS_CM, mixFractions },
+      spectrum,
+      PENCIL_DEPTHS_CM,
+      PENCIL_RADII_CM,
+    );
     pencils[energy] = { values: round(pencil.values) };
     console.log(
       `  ${energy}: polyenergetic and pencil kernels (${((performance.now() - t0) / 1000).toFixed(1)} s)`,
@@ -128,7 +153,7 @@ function main(): void {
   const beamFile: BeamKernelFile = {
     format: 'lamina.pointKernels.beams',
     ...provenance,
-    note: 'Polyenergetic water point kernels, w_E ∝ Φ_E·E·(μ/ρ)(E), from the monoenergetic Monte Carlo kernels in pointKernelsMono.bin. Photon-only: no contaminant electrons.',
+    note: 'Polyenergetic water point kernels, w_E ∝ Φ_E·E·(μ/ρ)(E), from the monoenergetic Monte Carlo kernels in pointKernelsMono.bin; per beam also the kernel released behind 20 cm of water (hardened) and f(t) of K(t) ≈ K(0) + f(t)·[K(20) − K(0)]. Photon kernels: contaminant electrons are a separate model (src/engine/beam/contaminantElectrons.ts).',
     radialEdgesCm: mono.radialEdgesCm,
     polarBins: mono.polarBins,
     beams,
@@ -136,8 +161,7 @@ function main(): void {
   const pencilFile: PencilKernelFile = {
     format: 'lamina.pencilKernels',
     ...provenance,
-    note: 'P(d, S) = dose within radius S at depth d from a pencil of unit energy fluence in water (radial cumulative), built from beamKernels.bin with water TERMA per energy bin and the inverse-square weighting of SSD 100 cm. Photon-only: no contaminant electrons.',
-    referenceSsdCm: 100,
+    note: 'P(d, S) = dose within radius S at depth d from a pencil of unit energy fluence in water (radial cumulative), built from beamKernels.bin with water TERMA per energy bin, kernels hardened with depth and tilted along the rays (the shear of slabSuperposition.ts). Photon kernels: contaminant electrons are a separate model.',
     depthsCm: PENCIL_DEPTHS_CM,
     radiiCm: PENCIL_RADII_CM,
     beams: pencils,

@@ -37,8 +37,22 @@ function decodeOne(name: GeneratedFileName, bytes: Uint8Array): unknown {
   if (name === 'beamKernels') {
     const k = doc as BeamKernelFile;
     const bins = k.radialEdgesCm.length * k.polarBins;
-    for (const [energy, b] of Object.entries(k.beams))
+    for (const [energy, b] of Object.entries(k.beams)) {
       check(isLength(b.primary, bins) && isLength(b.scatter, bins), file, `${energy}: bin count`);
+      check(
+        isLength(b.hardened?.primary, bins) && isLength(b.hardened?.scatter, bins),
+        file,
+        `${energy}: hardened kernel bin count`,
+      );
+      const mix = b.hardening;
+      check(
+        Array.isArray(mix?.filtrationsCm) &&
+          Array.isArray(mix?.mixFractions) &&
+          mix.filtrationsCm.length === mix.mixFractions.length,
+        file,
+        `${energy}: hardening filtrations and mixing fractions`,
+      );
+    }
   } else if (name === 'pencilKernels') {
     const p = doc as PencilKernelFile;
     const n = p.depthsCm.length * p.radiiCm.length;

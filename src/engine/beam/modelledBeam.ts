@@ -17,7 +17,7 @@ export function modelledBeamTables(energy: BeamEnergy) {
 
 const cache = new Map<BeamEnergy, WaterData>();
 
-/** Modelled water data of a beam energy (photon-only kernels: no contaminant electrons). */
+/** Modelled water data of a beam energy (photon kernels plus the contaminant-electron model). */
 export function modelledWaterData(energy: BeamEnergy): WaterData {
   const hit = cache.get(energy);
   if (hit) return hit;

@@ -45,6 +45,15 @@ export interface BeamKernelFile extends Provenance {
         scatter: Float32Array;
         escapedFraction: number;
         spectrumSource: string;
+        /** The kernel released behind `filtrationCm` of water (kernelHardening.ts). */
+        hardened: {
+          filtrationCm: number;
+          primary: Float32Array;
+          scatter: Float32Array;
+          escapedFraction: number;
+        };
+        /** f(t) of K(t) ≈ K(0) + f(t)·[K(t_ref) − K(0)]. */
+        hardening: { filtrationsCm: number[]; mixFractions: number[] };
       }
     >
   >;
@@ -53,7 +62,6 @@ export interface BeamKernelFile extends Provenance {
 export interface PencilKernelFile extends Provenance {
   format: 'lamina.pencilKernels';
   monoEnergiesMeV: number[];
-  referenceSsdCm: number;
   depthsCm: number[];
   radiiCm: number[];
   beams: Partial<Record<BeamEnergy, { values: Float32Array }>>;

@@ -106,6 +106,9 @@ export function finalizeMonteCarlo(
       `S_c = ${sc}`,
       `${histories} histories in ${acc.completed} of ${plan.batches} batches, seed ${plan.seed}`,
       spectrum.approximate ? 'spectrum approximate (derived stand-in)' : 'published spectrum',
+      caseScenario.parallel
+        ? 'no contaminant electrons'
+        : 'contaminant electrons of the modelled beam',
     ].join('; '),
     methodClass: 'type C',
     waterData: 'not used (Monte Carlo from spectra and cross sections)',

@@ -6,7 +6,8 @@ import { slabGeometry } from './geometry';
 import { Transport, type EnergyTally, type TransportOptions } from './transport';
 import { DepthDoseScorer } from './depthDoseScorer';
 import { makeSpectrumSampler } from './spectrumSampler';
-import { pencilRay, type SourceRay } from './beamSource';
+import { launchContaminantElectrons, pencilRay, type SourceRay } from './beamSource';
+import { contaminantSourceOf } from './contaminantSource';
 import { Rng } from './rng';
 import { scoringGrid, type McBinning, type McScenario } from './scenario';
 
@@ -38,6 +39,7 @@ export function runBatch(task: BatchTask): BatchTally {
     task.transport,
   );
   const spectrum = makeSpectrumSampler(task.scenario.energy);
+  const electrons = contaminantSourceOf(task.scenario);
   const rng = new Rng(task.seed, 0);
   const ray: SourceRay = { x: 0, y: 0, u: 0, v: 0, w: 1 };
   pencilRay(ray);
@@ -46,6 +48,7 @@ export function runBatch(task: BatchTask): BatchTally {
     rng.seedHistory(task.seed, first + h);
     const e = spectrum.sample(rng);
     transport.runPhoton(e, ray.x, ray.y, 0, ray.u, ray.v, ray.w, 0, rng);
+    if (electrons) launchContaminantElectrons(electrons, transport, rng);
   }
   return {
     batchIndex: task.batchIndex,

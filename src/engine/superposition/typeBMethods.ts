@@ -24,9 +24,9 @@ const LABELS: Record<TypeBEngine, string> = {
 
 const VARIANTS: Record<TypeBEngine, string> = {
   superposition:
-    'Monte Carlo point kernel, rectilinear density scaling, TERMA per energy bin (kernel not hardened); photon-only, no contaminant electrons; 1 cGy/MU at d_max, 10 × 10, SSD 100',
+    'Monte Carlo point kernel tilted along the rays and hardened with depth, rectilinear density scaling, TERMA per energy bin; contaminant electrons (fitted surface doses); 1 cGy/MU at d_max, 10 × 10, SSD 100',
   'pencil-beam':
-    'Pencil kernel from the Monte Carlo point kernel, read at radiological depth, lateral spread unscaled; photon-only, no contaminant electrons; 1 cGy/MU at d_max, 10 × 10, SSD 100',
+    'Pencil kernel from the Monte Carlo point kernel (hardened with depth), read at radiological depth, lateral spread unscaled; contaminant electrons (fitted surface doses); 1 cGy/MU at d_max, 10 × 10, SSD 100',
 };
 
 /** The water-data string printed with type-B results. */
@@ -36,7 +36,7 @@ export function modelledBeamSource(energy: BeamEnergy): string {
 
 function pointFlags(engine: TypeBEngine, input: TypeBInput, depthCm: number, dMaxCm: number) {
   const flags: string[] = [];
-  if (depthCm < dMaxCm) flags.push('build-up region (photon-only kernel)');
+  if (depthCm < dMaxCm) flags.push('build-up region (fitted contaminant-electron model)');
   if (engine === 'pencil-beam') {
     const depths = typeBModel(input.energy).pencil.depthsCm;
     if (radiologicalDepthCm(input.phantom, depthCm) > (depths[depths.length - 1] as number))
