@@ -2,7 +2,7 @@
 // planes, 2.5 mm grid): isodose lines at six levels, the raster pixels, the difference with
 // bilinear resampling, and one lateral profile. The planes themselves are timed in typeB.bench.ts.
 import { performance } from 'node:perf_hooks';
-import { interpolateViridis } from 'd3';
+import { interpolateViridis } from 'd3-scale-chromatic';
 import { computeApi } from '../src/compute/computeApi';
 import { parseRgb, planeRaster } from '../src/plots/doseMapLayout';
 import { indexMapper, isodoseLines } from '../src/plots/isodose';

@@ -17,6 +17,7 @@ import { buildPage, startPreview } from './lib/previewServer';
 import { errorRow, type BenchRow } from './lib/row';
 import { spread } from './lib/stats';
 import { typeACurveRows } from './lib/typeACurve';
+import { loadGeneratedDataFromDisk } from '../src/io/generatedDataNode';
 
 const BENCH_DIR = dirname(fileURLToPath(import.meta.url));
 
@@ -76,6 +77,7 @@ async function browserRows(): Promise<BenchRow[]> {
 }
 
 async function main(argv: string[]): Promise<number> {
+  loadGeneratedDataFromDisk();
   const repeatsText = option(argv, '--repeats');
   const repeats = repeatsText !== undefined ? Number(repeatsText) : undefined;
   if (repeats !== undefined && !(Number.isInteger(repeats) && repeats > 0)) {

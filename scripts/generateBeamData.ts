@@ -1,13 +1,16 @@
 // Generates the modelled water data of every beam energy from the superposition engine in water
-// (npm run generate:beamdata) → src/engine/data/generated/modelledBeams.json.
+// (npm run generate:beamdata) → src/engine/data/generated/modelledBeams.bin (a typed-array file,
+// src/io/typedArrayFile.ts: PDD and TMR rounded to 5 significant digits, stored as Float32).
 // Reads the kernels written by scripts/generateKernels.ts; deterministic (no random numbers).
-import { writeFileSync } from 'node:fs';
+import { loadGeneratedDataFromDisk, writeTypedArrayFileSync } from '../src/io/generatedDataNode';
 import { BEAM_ENERGIES } from '../src/engine/beam/energies';
-import { HEAD_SCATTER_MODEL } from '../src/engine/beam/headScatter';
+import { headScatterDescription } from '../src/engine/beam/headScatter';
 import { computeModelledBeamTables } from '../src/engine/beam/modelledBeamData';
 import { KERNEL_FORMAT_DATE, KERNEL_FORMAT_VERSION } from '../src/engine/kernels/kernelFiles';
-import { KERNEL_PROVENANCE } from '../src/engine/superposition/beamModel';
-import type { ModelledBeamFile } from '../src/engine/beam/modelledBeam';
+import { kernelProvenance } from '../src/engine/superposition/beamModel';
+import type { ModelledBeamFile } from '../src/engine/beam/modelledBeamFile';
+
+loadGeneratedDataFromDisk();
 
 const r = (x: number, digits = 5) => Number(x.toPrecision(digits));
 const beams: ModelledBeamFile['beams'] = {};
@@ -18,8 +21,8 @@ for (const energy of BEAM_ENERGIES) {
     dMaxCm: r(t.dMaxCm, 4),
     fieldsCm: t.fieldsCm,
     depthsCm: t.depthsCm,
-    pdd: t.pdd.map((row) => row.map((x) => r(x))),
-    tmr: t.tmr.map((row) => row.map((x) => r(x))),
+    pdd: t.pdd.map((row) => Float32Array.from(row, (x) => r(x))),
+    tmr: t.tmr.map((row) => Float32Array.from(row, (x) => r(x))),
     psf: t.psf.map((x) => r(x)),
     sp: t.sp.map((x) => r(x)),
     sc: t.sc.map((x) => r(x)),
@@ -36,11 +39,11 @@ const file: ModelledBeamFile = {
   formatVersion: KERNEL_FORMAT_VERSION,
   formatDate: KERNEL_FORMAT_DATE,
   generator: 'scripts/generateBeamData.ts',
-  kernels: KERNEL_PROVENANCE,
-  note: 'Superposition in water. PDD: SSD 100 cm, field at the surface. TMR: point at 100 cm from the source, field at the point. PSF = D(d_max, s)/D_primary(d_max) (primary kernel only); S_p = PSF/PSF(10); S_c: modelled head-scatter curve. Photon-only kernels: no contaminant electrons, so surface and build-up doses are too low and d_max lies deeper than in a clinical beam of the same quality.',
-  headScatterModel: HEAD_SCATTER_MODEL.description,
+  kernels: kernelProvenance(),
+  note: 'Superposition in water, photons from the kernels plus the contaminant-electron model (src/engine/data/contaminantElectrons.json). PDD: SSD 100 cm, field at the surface. TMR: point at 100 cm from the source, field at the point. PSF = D(d_max, s)/D_air with D_air the photon dose at the same point in a water mini-phantom of radius r_LCPE (Li et al. 1995); S_p = PSF/PSF(10); S_c: modelled head-scatter curve per energy.',
+  headScatterModel: headScatterDescription(),
   referenceDosePerMuCGy: 1,
   beams,
 };
-writeFileSync('src/engine/data/generated/modelledBeams.json', JSON.stringify(file));
-console.log('written to src/engine/data/generated/modelledBeams.json');
+writeTypedArrayFileSync('src/engine/data/generated/modelledBeams.bin', file);
+console.log('written to src/engine/data/generated/modelledBeams.bin');

@@ -7,6 +7,9 @@ import { calculatePlan } from '../src/compute/calculatePlan';
 import { validatePlan, type LaminaPlan } from '../src/io/planFile';
 import { serializeCase, validateCase } from '../src/io/caseFile';
 import type { LaminaCase } from '../src/io/caseSchema';
+import { loadGeneratedDataFromDisk } from '../src/io/generatedDataNode';
+
+loadGeneratedDataFromDisk();
 
 const waterData = {
   kind: 'tmr',

@@ -1,7 +1,7 @@
 // Figures measured in Debian's Chromium (launched with the flags of playwright.config.ts):
-// cold page load to the first render of the heading, and edit-to-paint latency of keyboard
-// nudges and pointer drags of a layer interface in the slab editor, up to the repaint of the
-// depth-dose chart's curves (when the page has both).
+// cold page load to the first paint of the heading, of the first dose curves and of the full
+// report, and edit-to-paint latency of keyboard nudges and pointer drags of a layer interface in
+// the slab editor, up to the repaint of the depth-dose chart's curves (when the page has both).
 import { chromium, type Browser, type Page } from '@playwright/test';
 import playwrightConfig from '../../playwright.config';
 import { errorRow, notMeasuredRow, type BenchRow } from './row';
@@ -15,6 +15,9 @@ export async function launchChromium(): Promise<Browser> {
 
 type Probe = Window & {
   __laminaHeadingMs?: number;
+  /** Cold load: first frame with dose curves, and with the full report's curves (ms). */
+  __laminaCurvesMs?: number;
+  __laminaFullCurvesMs?: number;
   __laminaLatencies?: number[];
   /** Input handled (capture listener) → the curves' paint (ms). */
   __laminaDispatchLatencies?: number[];
@@ -26,39 +29,74 @@ type Probe = Window & {
   __laminaFirstFrame?: number[];
 };
 
+const CHART_SELECTOR = '[data-testid="dose-chart"]';
+
 /**
  * Runs before any page script: notes the time (ms since navigation start) of the first frame
- * painted after an <h1> with text appears (requestAnimationFrame, then a message-channel task,
- * which runs after that frame's paint). Plain JavaScript text: functions compiled by tsx carry
- * name helpers that do not exist inside the page.
+ * painted after each of these has appeared: an <h1> with text (__laminaHeadingMs); a dose curve
+ * in the depth-dose chart (__laminaCurvesMs, the quick preview or the full report, whichever comes
+ * first); the full report's curves, with the superposition drawn and no curve marked as updating
+ * (__laminaFullCurvesMs). Each time is taken by requestAnimationFrame, then a message-channel task,
+ * which runs after that frame's paint. Plain JavaScript text: functions compiled by tsx carry name
+ * helpers that do not exist inside the page.
  */
-const HEADING_PROBE = `(() => {
-  const obs = new MutationObserver(() => {
-    const h = document.querySelector('h1');
-    if (!h || !h.textContent) return;
-    obs.disconnect();
-    requestAnimationFrame(() => {
-      const ch = new MessageChannel();
-      ch.port1.onmessage = () => { window.__laminaHeadingMs = performance.now(); };
-      ch.port2.postMessage(0);
-    });
-  });
-  obs.observe(document, { childList: true, subtree: true, characterData: true });
+const COLD_LOAD_PROBE = `(() => {
+  const marks = [
+    ['__laminaHeadingMs', () => { const h = document.querySelector('h1'); return !!(h && h.textContent); }],
+    ['__laminaCurvesMs', () => !!document.querySelector('${CHART_SELECTOR} path.curve[d]')],
+    ['__laminaFullCurvesMs', () =>
+      !!document.querySelector('${CHART_SELECTOR} path.curve[data-method="superposition"]') &&
+      !document.querySelector('${CHART_SELECTOR} path.curve.updating')],
+  ];
+  const check = () => {
+    for (const m of marks) {
+      if (m[2] || !m[1]()) continue;
+      m[2] = true;
+      requestAnimationFrame(() => {
+        const ch = new MessageChannel();
+        ch.port1.onmessage = () => { window[m[0]] = performance.now(); };
+        ch.port2.postMessage(0);
+      });
+    }
+    if (marks.every((m) => m[2])) obs.disconnect();
+  };
+  const obs = new MutationObserver(check);
+  obs.observe(document, { childList: true, subtree: true, characterData: true, attributes: true });
 })();`;
 
-async function coldLoadOnce(
-  browser: Browser,
-  url: string,
-): Promise<{ heading: number; fcp: number }> {
+interface ColdLoad {
+  heading: number;
+  curves: number;
+  fullCurves: number;
+  fcp: number;
+}
+
+async function coldLoadOnce(browser: Browser, url: string): Promise<ColdLoad> {
   const context = await browser.newContext(); // fresh profile: empty cache
   try {
     const page = await context.newPage();
-    await page.addInitScript({ content: HEADING_PROBE });
+    await page.addInitScript({ content: COLD_LOAD_PROBE });
     await page.goto(url, { waitUntil: 'commit' });
-    await page.waitForFunction(() => (window as Probe).__laminaHeadingMs !== undefined, null, {
-      timeout: 30_000,
+    await page.waitForFunction(
+      () => {
+        const w = window as Probe;
+        return (
+          w.__laminaHeadingMs !== undefined &&
+          w.__laminaCurvesMs !== undefined &&
+          w.__laminaFullCurvesMs !== undefined
+        );
+      },
+      null,
+      { timeout: 30_000 },
+    );
+    const marks = await page.evaluate(() => {
+      const w = window as Probe;
+      return {
+        heading: w.__laminaHeadingMs as number,
+        curves: w.__laminaCurvesMs as number,
+        fullCurves: w.__laminaFullCurvesMs as number,
+      };
     });
-    const heading = await page.evaluate(() => (window as Probe).__laminaHeadingMs as number);
     // The paint entry can be queued after the heading's frame: wait for it (at most 2 s).
     const fcp = await page.evaluate(
       () =>
@@ -70,41 +108,46 @@ async function coldLoadOnce(
           setTimeout(() => resolve(NaN), 2000);
         }),
     );
-    return { heading, fcp };
+    return { ...marks, fcp };
   } finally {
     await context.close();
   }
 }
 
 export async function coldLoadRows(browser: Browser, url: string, runs = 5): Promise<BenchRow[]> {
-  const heading: number[] = [];
-  const fcp: number[] = [];
-  for (let i = 0; i < runs; i++) {
-    const r = await coldLoadOnce(browser, url);
-    heading.push(r.heading);
-    if (Number.isFinite(r.fcp)) fcp.push(r.fcp);
-  }
+  const all: ColdLoad[] = [];
+  for (let i = 0; i < runs; i++) all.push(await coldLoadOnce(browser, url));
+  const group = 'page (Chromium)';
   const rows: BenchRow[] = [
     {
-      group: 'page (Chromium)',
+      group,
       name: 'cold load: navigation → heading painted',
       unit: 'ms',
-      samples: heading,
+      samples: all.map((r) => r.heading),
       note: `fresh browser context each run, vite preview, ${runs} runs`,
     },
-  ];
-  if (fcp.length > 0)
-    rows.push({
-      group: 'page (Chromium)',
-      name: 'cold load: first contentful paint',
+    {
+      group,
+      name: 'cold load: navigation → first dose curves painted',
       unit: 'ms',
-      samples: fcp,
-    });
+      samples: all.map((r) => r.curves),
+      note: 'depth-dose chart, demo case: the first curve drawn (quick preview or full report)',
+    },
+    {
+      group,
+      name: 'cold load: navigation → full report painted',
+      unit: 'ms',
+      samples: all.map((r) => r.fullCurves),
+      note: 'superposition curve drawn and no curve marked as updating',
+    },
+  ];
+  const fcp = all.map((r) => r.fcp).filter(Number.isFinite);
+  if (fcp.length > 0)
+    rows.push({ group, name: 'cold load: first contentful paint', unit: 'ms', samples: fcp });
   return rows;
 }
 
 const HANDLE = '[data-testid="boundary-1"]';
-const CHART = '[data-testid="dose-chart"]';
 const EDIT_GROUP = 'page (Chromium)';
 const EDIT_NAME = 'edit-to-paint, arrow-key nudge of a layer interface';
 const DRAG_NAME = 'edit-to-paint, pointer drag of a layer interface';
@@ -114,7 +157,7 @@ const DRAG_NAME = 'edit-to-paint, pointer drag of a layer interface';
  * curve paths next change (a new result drawn), notes the time from the input event to the
  * paint that follows, the time from the input's handling to that paint, and whether that paint
  * was the first frame after the input was handled (the rAF callbacks of one frame share their
- * timestamp). (No named inner functions: see HEADING_PROBE.)
+ * timestamp). (No named inner functions: see COLD_LOAD_PROBE.)
  */
 function installLatencyProbe(chartSelector: string): void {
   const w = window as Probe;
@@ -285,7 +328,7 @@ const HOVER_NAME = 'reference: crosshair follows the pointer over the chart (no 
  */
 async function hoverRows(page: Page, moves: number): Promise<BenchRow[]> {
   const box = await (
-    await page.waitForSelector(`${CHART} rect.hit`, { timeout: 10_000 })
+    await page.waitForSelector(`${CHART_SELECTOR} rect.hit`, { timeout: 10_000 })
   ).boundingBox();
   if (!box) return [notMeasuredRow(EDIT_GROUP, HOVER_NAME, 'the chart has no hit area')];
   const x0 = box.x + box.width / 2;
@@ -333,16 +376,16 @@ export async function editToPaintRows(
     await page.goto(url);
     await page.waitForSelector('h1', { timeout: 30_000 });
     const handle = await page.waitForSelector(HANDLE, { timeout: 10_000 }).catch(() => null);
-    const chart = await page.waitForSelector(CHART, { timeout: 10_000 }).catch(() => null);
+    const chart = await page.waitForSelector(CHART_SELECTOR, { timeout: 10_000 }).catch(() => null);
     if (!handle || !chart)
       return [
         notMeasuredRow(
           EDIT_GROUP,
           EDIT_NAME,
-          `the page exposes no slab-editor interface handle (${HANDLE}) or depth-dose chart (${CHART})`,
+          `the page exposes no slab-editor interface handle (${HANDLE}) or depth-dose chart (${CHART_SELECTOR})`,
         ),
       ];
-    await page.evaluate(installLatencyProbe, CHART);
+    await page.evaluate(installLatencyProbe, CHART_SELECTOR);
     const heapAfterLoad = await pageHeapMb(page);
     const rows = await keyboardRows(page, nudges);
     // Let the last full calculation land before the drag starts.

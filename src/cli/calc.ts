@@ -2,6 +2,7 @@
 // page (src/compute/calcRequest.ts), in Node.
 import { describeProblems } from '../io/caseFile';
 import { PLAN_FORMAT } from '../io/planSchema';
+import { loadGeneratedDataFromDisk } from '../io/generatedDataNode';
 import { parseArgs } from './args';
 import { runBatch, runJsonLines } from './batch';
 import { calculateDocument, jsonOf, loadDocument, textOf, WATER_DATA_USAGE } from './checkCommand';
@@ -31,6 +32,7 @@ ${MC_USAGE}
 ${DICOM_USAGE}`;
 
 function main(argv: string[]): number {
+  loadGeneratedDataFromDisk();
   let args;
   try {
     args = parseArgs(argv);

@@ -34,6 +34,7 @@ import type { McResult } from '../engine/montecarlo/monteCarloResult';
 import { convertMethodDose } from '../engine/dose/doseConversion';
 import { doseQuantityLabel as doseToLabel, type DoseQuantity } from '../engine/dose/doseQuantity';
 import { resolveDoseTo } from './doseConvention';
+import { depthGridCm } from './depthGrid';
 
 export { CALC_FORMAT, CALC_VERSION, CAUTIONS, type CalcReport };
 
@@ -74,13 +75,7 @@ export function phantomOfCase(c: LaminaCase): SlabPhantom {
   return makeSlabPhantom(c.layers);
 }
 
-/** Depth grid from 0 to the phantom's bottom with the given step, always including the bottom. */
-export function depthGridCm(totalCm: number, stepCm: number): number[] {
-  const n = Math.max(1, Math.round(totalCm / stepCm));
-  const out: number[] = [];
-  for (let i = 0; i <= n; i++) out.push((totalCm * i) / n);
-  return out;
-}
+export { depthGridCm };
 
 /** The deterministic part of a case calculation, before warnings: reused for Monte Carlo merges. */
 export interface CaseParts {

@@ -13,20 +13,18 @@ import { ssdCmOf } from '../engine/beam/geometry';
 import type { WaterData } from '../engine/beam/waterData';
 import { dosePerMuFactors, type DosePerMuFactors } from '../engine/check/dosePerMu';
 import { isBeyondWaterData } from '../engine/beam/waterDataReach';
-import { checkPlan, type CheckBeamInput } from '../engine/check/planCheck';
+import { checkPlan } from '../engine/check/planCheck';
 import { DEFAULT_TOLERANCES } from '../engine/check/tolerance';
 import type { LaminaPlan } from '../io/planFile';
 import type { LaminaCase } from '../io/caseSchema';
-import {
-  PLAN_CALC_FORMAT,
-  type CalcReport,
-  type PlanBeamReport,
-  type PlanReport,
-} from '../contract/reports';
+import { PLAN_CALC_FORMAT, type PlanBeamReport, type PlanReport } from '../contract/reports';
 import type { CaseCalcOptions, McRunAttachment, PlanCalcOverrides } from './calcRequest';
 import { CASE_WATER, resolveWater, type WaterSourceSpec } from './waterSource';
 import { monteCarloRunKey } from './monteCarloRunKey';
 import { resolveDoseTo } from './doseConvention';
+import { checkInputOf } from './checkInput';
+
+export { checkInputOf };
 
 export type { PlanBeamReport, PlanReport };
 
@@ -39,32 +37,6 @@ export interface PlanCalcOptions extends CaseCalcOptions, PlanCalcOverrides {
   mcRun?: McRunAttachment | null;
   /** How a beam's deterministic part is computed (the worker passes a cached one). */
   partsOf?: (c: LaminaCase, options: CalcOptions) => CaseParts;
-}
-
-/** The check's view of one calculated beam. */
-export function checkInputOf(
-  beam: { id: string; label: string; weight: number },
-  c: LaminaCase,
-  report: CalcReport,
-): CheckBeamInput {
-  return {
-    id: beam.id,
-    label: beam.label,
-    weight: beam.weight,
-    planningMu: c.beam.planningMu,
-    layers: report.layers,
-    points: c.points,
-    methods: report.methods.map((m) => ({
-      id: m.id,
-      label: m.label,
-      // The Monte Carlo's statistical 1σ travels with its dose per MU (deterministic methods have none).
-      points: m.points.map((p) =>
-        p.sigmaDosePerMuCGy === undefined
-          ? { id: p.id, dosePerMuCGy: p.dosePerMuCGy }
-          : { id: p.id, dosePerMuCGy: p.dosePerMuCGy, sigmaDosePerMuCGy: p.sigmaDosePerMuCGy },
-      ),
-    })),
-  };
 }
 
 /** The water factor chain at each point of a case (empty without water data). */

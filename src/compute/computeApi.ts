@@ -3,7 +3,7 @@
 // functions directly. Calculations go through the one contract (src/compute/calcRequest.ts).
 import { validateCase } from '../io/caseFile';
 import { makeSlabPhantom, radiologicalDepthCurve } from '../engine/phantom/slabPhantom';
-import { depthGridCm } from './calculateCase';
+import { depthGridCm } from './depthGrid';
 import type { LayerSpec } from '../engine/phantom/slabPhantom';
 import type { MeasuredTableInput, MeasuredTableSummary } from '../engine/beam/measuredTable';
 import { ssdCmOf } from '../engine/beam/geometry';

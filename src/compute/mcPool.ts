@@ -6,7 +6,7 @@ import type { McCaseInput, McOptions } from '../engine/montecarlo/monteCarloPlan
 import type { McResult } from '../engine/montecarlo/monteCarloResult';
 import type { BatchTally, BatchTask } from '../engine/montecarlo/runBatch';
 import { McRunState, type McProgress } from './mcRunState';
-import { depthGridCm } from './calculateCase';
+import { depthGridCm } from './depthGrid';
 import { superviseWorker } from './workerSupervisor';
 
 /** What the pool needs from a worker; `dispose` ends it. */

@@ -15,8 +15,9 @@ import { typeAMethodResults } from '../engine/corrections/typeAResults';
 import type { MethodResult } from '../engine/methodResult';
 import type { SlabPhantom } from '../engine/phantom/slabPhantom';
 import type { LaminaCase } from '../io/caseSchema';
+import { NEEDS_WATER_DATA } from '../contract/reports';
 
-export const NEEDS_WATER_DATA = 'needs water data: load a measured TMR/PDD table';
+export { NEEDS_WATER_DATA };
 
 /**
  * ETAR's default layer weights: the scatter part of our own water kernel for the beam. TERMA is

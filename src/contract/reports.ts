@@ -72,3 +72,6 @@ export const CAUTIONS: readonly string[] = [
   'Clinical decisions follow the local protocol and a licensed medical physicist’s judgement.',
   'Slab phantoms are idealised: laterally infinite flat layers, central axis only, no patient contour or motion.',
 ];
+
+/** Reason given for a type-A method that has no water data to work from (the page tests for it). */
+export const NEEDS_WATER_DATA = 'needs water data: load a measured TMR/PDD table';

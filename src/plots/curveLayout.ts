@@ -1,6 +1,7 @@
 // Layout of a chart of curves against depth: scales, ticks, one path per series (gaps where a
 // value is null), ±1σ bands, warning bands and layer shading. Pure: numbers in, drawables out.
-import { area, line, scaleLinear, type ScaleLinear } from 'd3';
+import { scaleLinear, type ScaleLinear } from 'd3-scale';
+import { area, line } from 'd3-shape';
 import {
   depthScale,
   depthTicks,

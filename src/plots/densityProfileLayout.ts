@@ -2,7 +2,8 @@
 // the CT profile as a line, the slabs drawn over it as shaded blocks (shade by ρ_e, as on the
 // slab strip) with their level as a step line, and the isocentre and extra points marked.
 // Pure: numbers in, drawables out.
-import { line, scaleLinear, type ScaleLinear } from 'd3';
+import { scaleLinear, type ScaleLinear } from 'd3-scale';
+import { line } from 'd3-shape';
 import { innerHeight, innerWidth, ticksOf, type PlotFrame, type Tick } from './depthAxis';
 import { densityShade } from './slabLayout';
 

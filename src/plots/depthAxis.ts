@@ -1,6 +1,6 @@
 // The depth axis shared by the slab strip and the charts: the same scale and ticks everywhere,
 // so an interface on the strip sits exactly above the same depth on every chart.
-import { scaleLinear, type ScaleLinear } from 'd3';
+import { scaleLinear, type ScaleLinear } from 'd3-scale';
 
 export interface PlotFrame {
   width: number;

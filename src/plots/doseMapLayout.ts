@@ -1,7 +1,7 @@
 // Layout of an x–z dose map drawn with depth across (beam from the left, the same depth axis as
 // the slab strip) and lateral position up: scales, ticks, where the raster image goes, the raster
 // itself (one pixel per node), layer interfaces and a horizontal colour bar under the map.
-import { scaleLinear, type ScaleLinear } from 'd3';
+import { scaleLinear, type ScaleLinear } from 'd3-scale';
 import {
   depthScale,
   depthTicks,

@@ -1,7 +1,7 @@
 // Isodose lines of a dose plane (marching squares, d3-contour) as SVG paths in pixels, without the
 // closing runs d3 adds along the grid's edge, and a label for each level placed where it does not
 // overlap another label.
-import { contours } from 'd3';
+import { contours } from 'd3-contour';
 import type { PlaneGrid } from './planeGrid';
 
 export interface IsodoseLine {

@@ -1,6 +1,7 @@
 // Layout of a lateral dose profile chart: lateral position across, dose up, one path per method
 // (each on its own lateral nodes), with ticks on both axes. Pure: numbers in, drawables out.
-import { line, scaleLinear, type ScaleLinear } from 'd3';
+import { scaleLinear, type ScaleLinear } from 'd3-scale';
+import { line } from 'd3-shape';
 import { innerHeight, innerWidth, ticksOf, type PlotFrame, type Tick } from './depthAxis';
 
 export interface ProfileSeries {

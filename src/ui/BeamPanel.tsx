@@ -1,6 +1,6 @@
 // Beam set-up: energy, SSD or SAD geometry, field size at 100 cm.
 import { BEAM_ENERGIES, BEAM_ENERGY_LABELS, isBeamEnergy } from '../engine/beam/energies';
-import { NEEDS_WATER_DATA } from '../compute/typeAForCase';
+import { NEEDS_WATER_DATA } from '../contract/reports';
 import { editCase, setTab, useAppStore } from '../state/store';
 import type { EditorCase } from '../state/editorCase';
 import { NumberField } from './NumberField';

@@ -1,6 +1,6 @@
 // What the calculation could and could not do, in plain words: case problems with their field
 // paths, methods that are unavailable and why, or that no method has produced results.
-import { NEEDS_WATER_DATA } from '../compute/typeAForCase';
+import { NEEDS_WATER_DATA } from '../contract/reports';
 import { setTab, setWaterSource, useAppStore } from '../state/store';
 import { loadDemoTables } from './demoTables';
 import { RetryButton } from './RetryButton';

@@ -123,8 +123,9 @@ export function WaterDataPanel({ width }: { width: number }) {
             onChange={() => setWaterSource('modelled')}
             data-testid="source-modelled"
           />{' '}
-          Modelled beam ({energy}): generated with this workbench's own kernels, photon-only (no
-          contaminant electrons, so build-up doses are low). A model, not a commissioned beam.
+          Modelled beam ({energy}): generated with this workbench's own kernels and a
+          contaminant-electron model fitted to published surface doses. A model, not a commissioned
+          beam.
         </label>
         <label>
           <input

@@ -17,7 +17,7 @@ describe('dose planes across the two kernel engines', () => {
     // Derived: the pencil kernel is the point kernel integrated along depth, so in homogeneous
     // water both engines describe the same dose; 1 % allows for the two discretisations
     // (pencil-kernel depth table, superposition grid). Core: |x| < 3 cm (field 10 × 10 at
-    // 100 cm), beyond 2 cm depth (past d_max, where the photon-only kernels differ most).
+    // 100 cm), beyond 2 cm depth (past d_max, where the two discretisations differ most).
     const { sup, pb } = planes('water');
     const d = planeDifferencePercent(sup, pb, centralAxisMax(pb));
     let worst = 0;

@@ -57,9 +57,9 @@ describe('Monte Carlo water depth dose (typical published beams, from memory)', 
   it.each([
     // Typical published 10 × 10 cm², SSD 100 beams (from memory): 6 MV d_max 1.2–1.8 cm, PDD(10)
     // 64–69 %; 18 MV d_max 2.8–3.8 cm, PDD(10) 76–82 %. The 18 MV spectrum is a derived stand-in
-    // tuned on PDD(10) only (its one parameter fitted with the superposition engine), so d_max is
-    // an independent check. The engine is photon-only: contaminant electrons from the head, which
-    // pull a measured d_max shallower, are not modelled.
+    // tuned on PDD(10) and TPR20,10 (its one parameter fitted with the superposition engine), so
+    // d_max is an independent check. The contaminant electrons from the head, which pull a
+    // measured d_max shallower, are launched with the photons (fitted model).
     { energy: '6MV' as const, histories: 300000, dmax: [1.2, 1.8], pdd10: [64, 69] },
     { energy: '18MV' as const, histories: 200000, dmax: [2.8, 3.8], pdd10: [76, 82] },
   ])(

@@ -24,3 +24,11 @@ export function fieldAtDepthCm(side100Cm: number, ssdCm: number, depthCm: number
 export function equivalentSquareCm(aCm: number, bCm: number): number {
   return (2 * aCm * bCm) / (aCm + bCm);
 }
+
+/**
+ * Side of the square field equivalent to a circle of radius R: R = 0.561·s (equivalent circle of
+ * a square field, common practice; seen as such on a public BJR figure caption).
+ */
+export function squareOfEquivalentCircleCm(radiusCm: number): number {
+  return radiusCm / 0.561;
+}

@@ -3,11 +3,19 @@
 // S_p and the modelled S_c, for square fields 2–40 cm and depths 0–40 cm.
 // Definitions (standard, Khan, from memory): PDD(d, s) = 100·D(d)/D(d_max) at SSD 100, field s
 // at the surface; TMR(d, s) = D(d)/D(d_max) with the point at 100 cm from the source and field s
-// there. Model choices (ours): D_air in the peak-scatter factor is the dose at d_max from the
-// primary part of the kernel alone (first-generation electrons, laterally in equilibrium, no
-// phantom scatter): PSF(s) = D(d_max, s)/D_primary(d_max); S_p(s) = PSF(s)/PSF(10).
+// there; PSF(s) = TAR(d_max, s) = D(d_max, s)/D_air, where D_air is the dose at the same point
+// in a mini-phantom of water just large enough for electronic equilibrium. Model choices (ours):
+// the mini-phantom is a water cylinder of radius r_LCPE = 5.973·TPR20,10 − 2.688 g/cm² (the
+// lateral equilibrium radius of Li et al., Med. Phys. 22, 1167 (1995)), modelled as the square
+// field of equal area on a water slab d_max + r_LCPE thick with the point at d_max, photons only
+// (its wall stops the contaminant electrons, as a build-up cap does). Its dose includes the
+// photons scattered inside it — as a measured D_air does — which is why PSF(10 × 10) of 6 MV is
+// about 1.04 and not the 1.08 of total over first-generation-electron dose at d_max.
+// S_p(s) = PSF(s)/PSF(10).
 import type { BeamEnergy } from './energies';
 import { modelledHeadScatter } from './headScatter';
+import { squareOfEquivalentCircleCm } from './geometry';
+import { lateralEquilibriumRangeGPerCm2 } from '../equilibrium/lateralRange';
 import { waterPhantom } from '../phantom/slabPhantom';
 import { typeBModel } from '../superposition/beamModel';
 import { superpositionDose } from '../superposition/slabSuperposition';
@@ -44,6 +52,24 @@ export interface ModelledBeamTables {
   tpr2010: number;
 }
 
+/**
+ * D_air of the peak-scatter factor: photon dose at d_max on the axis of a water mini-phantom of
+ * radius r_LCPE (from the beam's TPR20,10), the point 100 cm from the source (see the header).
+ */
+export function miniPhantomDose(energy: BeamEnergy, dMaxCm: number, tpr2010: number): number {
+  const radiusCm = lateralEquilibriumRangeGPerCm2(tpr2010);
+  const side = squareOfEquivalentCircleCm(radiusCm);
+  const model = typeBModel(energy);
+  return superpositionDose(
+    model.superpositionKernel('total'),
+    model.spectrum,
+    waterPhantom(dMaxCm + radiusCm),
+    { ssdCm: 100 - dMaxCm, fieldXCm: side, fieldYCm: side },
+    [dMaxCm],
+    [0],
+  )[0] as number;
+}
+
 export function computeModelledBeamTables(
   energy: BeamEnergy,
   fieldsCm: readonly number[] = MODELLED_FIELDS_CM,
@@ -53,16 +79,7 @@ export function computeModelledBeamTables(
   const dMaxCm = referencePoint('superposition', energy).dMaxCm;
   const pdd: number[][] = [];
   const tmr: number[][] = [];
-  const psf: number[] = [];
-  const model = typeBModel(energy);
-  const primaryAtDMax = superpositionDose(
-    model.quadrant('primary'),
-    model.spectrum,
-    phantom,
-    { ssdCm: 100 - dMaxCm, fieldXCm: 40, fieldYCm: 40 },
-    [dMaxCm],
-    [0],
-  )[0] as number;
+  const atDMax: number[] = [];
   for (const s of fieldsCm) {
     const field = { fieldXCm: s, fieldYCm: s };
     const ssd = typeBRawDose(
@@ -83,17 +100,20 @@ export function computeModelledBeamTables(
         [d],
         [0],
       )[0] as number;
-    const atDMax = atDepth(dMaxCm);
-    tmr.push(depthsCm.map((d) => atDepth(d) / atDMax));
-    psf.push(atDMax / primaryAtDMax);
+    const reference = atDepth(dMaxCm);
+    tmr.push(depthsCm.map((d) => atDepth(d) / reference));
+    atDMax.push(reference);
   }
   const i10 = fieldsCm.indexOf(10);
-  const psf10 = psf[i10] as number;
   const depthIndex = (d: number) => depthsCm.indexOf(d);
   const pdd10 = pdd[i10]![depthIndex(10)] as number;
   const pdd20 = pdd[i10]![depthIndex(20)] as number;
   const tmr10 = tmr[i10]![depthIndex(10)] as number;
   const tmr20 = tmr[i10]![depthIndex(20)] as number;
+  const tpr2010 = tmr20 / tmr10;
+  const dAir = miniPhantomDose(energy, dMaxCm, tpr2010);
+  const psf = atDMax.map((d) => d / dAir);
+  const psf10 = psf[i10] as number;
   return {
     energy,
     dMaxCm,
@@ -103,9 +123,9 @@ export function computeModelledBeamTables(
     tmr,
     psf,
     sp: psf.map((p) => p / psf10),
-    sc: fieldsCm.map((s) => modelledHeadScatter(s)),
+    sc: fieldsCm.map((s) => modelledHeadScatter(energy, s)),
     pdd10,
     pdd2010: pdd20 / pdd10,
-    tpr2010: tmr20 / tmr10,
+    tpr2010,
   };
 }

@@ -16,7 +16,7 @@ export const TYPE_A_METHODS: readonly TypeAMethod[] = [
   etarMethod,
 ];
 
-export const TYPE_A_METHOD_IDS: readonly string[] = TYPE_A_METHODS.map((m) => m.id);
+export { TYPE_A_METHOD_IDS } from './typeAMethodIds';
 
 export function typeAMethodById(id: string): TypeAMethod | undefined {
   return TYPE_A_METHODS.find((m) => m.id === id);

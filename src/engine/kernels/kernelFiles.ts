@@ -1,5 +1,7 @@
 // Shapes of the generated kernel files in src/engine/data/generated/ (written by
-// scripts/generateKernels.ts) and the grids they share.
+// scripts/generateKernels.ts as typed-array files, src/io/typedArrayFile.ts) and the grids they
+// share. Bin values are stored as Float32 (the generator rounds them to 5 significant digits
+// first, so Float32 keeps them to 6e-8); grids stay exact decimal numbers.
 import type { BeamEnergy } from '../beam/energies';
 import type { MonoKernel } from './polyenergeticKernel';
 
@@ -23,8 +25,8 @@ export interface MonoKernelFile extends Provenance {
   kernels: {
     energyMeV: number;
     seed: number;
-    primary: number[];
-    scatter: number[];
+    primary: Float32Array;
+    scatter: Float32Array;
     escapedFraction: number;
   }[];
 }
@@ -38,11 +40,20 @@ export interface BeamKernelFile extends Provenance {
     Record<
       BeamEnergy,
       {
-        weights: number[];
-        primary: number[];
-        scatter: number[];
+        weights: Float32Array;
+        primary: Float32Array;
+        scatter: Float32Array;
         escapedFraction: number;
         spectrumSource: string;
+        /** The kernel released behind `filtrationCm` of water (kernelHardening.ts). */
+        hardened: {
+          filtrationCm: number;
+          primary: Float32Array;
+          scatter: Float32Array;
+          escapedFraction: number;
+        };
+        /** f(t) of K(t) ≈ K(0) + f(t)·[K(t_ref) − K(0)]. */
+        hardening: { filtrationsCm: number[]; mixFractions: number[] };
       }
     >
   >;
@@ -51,10 +62,9 @@ export interface BeamKernelFile extends Provenance {
 export interface PencilKernelFile extends Provenance {
   format: 'lamina.pencilKernels';
   monoEnergiesMeV: number[];
-  referenceSsdCm: number;
   depthsCm: number[];
   radiiCm: number[];
-  beams: Partial<Record<BeamEnergy, { values: number[] }>>;
+  beams: Partial<Record<BeamEnergy, { values: Float32Array }>>;
 }
 
 /** The monoenergetic kernels of a stored file as kernel tables (ascending energy). */

@@ -19,20 +19,24 @@ const GL_W = [
 /** Sub-intervals per side of the diagonal, clustered towards the corner direction φ*. */
 const PANELS = 3;
 
+/** Number of azimuthal quadrature nodes of one quadrant integral. */
+export const QUADRANT_NODES = 2 * PANELS * GL_X.length;
+
 /**
- * Azimuthal quadrature: (1/2π)·∫₀^{π/2} F(min(U/cos φ, V/sin φ)) dφ, for U, V ≥ 0. Composite
+ * Nodes of the azimuthal quadrature of (1/2π)·∫₀^{π/2} F(min(U/cos φ, V/sin φ)) dφ for U, V > 0:
+ * writes the radii s_k and weights w_k (Σ_k w_k·F(s_k) is the integral). Composite
  * Gauss–Legendre, panels clustered quadratically towards the corner direction φ* = atan(V/U),
  * where s_max changes fastest (thin rectangles).
  */
-export function quadrantFromRadial(
-  radialCumulative: (sCm: number) => number,
+export function quadrantQuadrature(
   uCm: number,
   vCm: number,
-): number {
-  if (uCm <= 0 || vCm <= 0) return 0;
+  radiiCm: Float64Array,
+  weights: Float64Array,
+): void {
   const split = Math.atan2(vCm, uCm);
   const rest = 0.5 * Math.PI - split;
-  let sum = 0;
+  let n = 0;
   for (let p = 0; p < PANELS; p++) {
     // Panel p covers fractions [f0, f1] of each side's width, measured away from φ*.
     const f0 = (p / PANELS) ** 2;
@@ -43,12 +47,34 @@ export function quadrantFromRadial(
       const w = GL_W[k] as number;
       const x = GL_X[k] as number;
       const phi1 = split - split * f0 - h1 * (1 + x);
-      sum += w * h1 * radialCumulative(uCm / Math.cos(phi1));
+      radiiCm[n] = uCm / Math.cos(phi1);
+      weights[n++] = (w * h1) / (2 * Math.PI);
       const phi2 = split + rest * f0 + h2 * (1 + x);
-      sum += w * h2 * radialCumulative(vCm / Math.sin(phi2));
+      radiiCm[n] = vCm / Math.sin(phi2);
+      weights[n++] = (w * h2) / (2 * Math.PI);
     }
   }
-  return sum / (2 * Math.PI);
+}
+
+// Scratch for quadrantFromRadial (the engine is single-threaded per worker; the radial function
+// it calls must not call it again).
+const SCRATCH_RADII = new Float64Array(QUADRANT_NODES);
+const SCRATCH_WEIGHTS = new Float64Array(QUADRANT_NODES);
+
+/** Azimuthal quadrature (1/2π)·∫₀^{π/2} F(min(U/cos φ, V/sin φ)) dφ, for U, V ≥ 0. */
+export function quadrantFromRadial(
+  radialCumulative: (sCm: number) => number,
+  uCm: number,
+  vCm: number,
+): number {
+  if (uCm <= 0 || vCm <= 0) return 0;
+  const radii = SCRATCH_RADII;
+  const weights = SCRATCH_WEIGHTS;
+  quadrantQuadrature(uCm, vCm, radii, weights);
+  let sum = 0;
+  for (let k = 0; k < QUADRANT_NODES; k++)
+    sum += (weights[k] as number) * radialCumulative(radii[k] as number);
+  return sum;
 }
 
 /** Signed quadrant integral: sgn(U)·sgn(V)·quadrant(|U|, |V|). */
@@ -89,37 +115,76 @@ export interface QuadrantTable {
 }
 
 export function quadrantTable(q: CylinderCumulative, lateralSteps = 44): QuadrantTable {
+  return quadrantTables([q], lateralSteps)[0] as QuadrantTable;
+}
+
+/**
+ * Quadrant tables of several cylinder-cumulative kernels on the same grids (their ζ and radius
+ * grids must agree). The azimuthal quadrature nodes of each lateral pair (U, V) and their places
+ * on the radius grid are found once and reused for every ζ row and every kernel.
+ */
+export function quadrantTables(
+  qs: readonly CylinderCumulative[],
+  lateralSteps = 44,
+): QuadrantTable[] {
+  const first = qs[0];
+  if (!first) return [];
+  for (const q of qs)
+    if (
+      q.zeta.nodes.length !== first.zeta.nodes.length ||
+      q.radius.nodes.length !== first.radius.nodes.length
+    )
+      throw new RangeError('quadrantTables: the cylinder tables use different grids');
   const lateral = makeSinhGrid(
-    q.radius.nodes[q.radius.nodes.length - 1] as number,
+    first.radius.nodes[first.radius.nodes.length - 1] as number,
     lateralSteps,
     5,
   );
   const nL = lateral.nodes.length;
-  const nZ = q.zeta.nodes.length;
-  const values = new Float64Array(nZ * nL * nL);
-  const nS = q.radius.nodes.length;
-  for (let iz = 0; iz < nZ; iz++) {
-    // ζ is a node of the cylinder table: interpolate in radius only, along its row.
-    const row = q.values.subarray(iz * nS, (iz + 1) * nS);
-    const radial = (s: number): number => {
-      const p = q.radius.position(s);
-      const i = Math.min(Math.floor(p), nS - 2);
-      const t = p - i;
-      return (1 - t) * (row[i] as number) + t * (row[i + 1] as number);
-    };
-    for (let iu = 1; iu < nL; iu++) {
-      for (let iv = 1; iv <= iu; iv++) {
-        const c = quadrantFromRadial(
-          radial,
-          lateral.nodes[iu] as number,
-          lateral.nodes[iv] as number,
-        );
-        values[(iz * nL + iu) * nL + iv] = c;
-        values[(iz * nL + iv) * nL + iu] = c;
+  const nZ = first.zeta.nodes.length;
+  const nS = first.radius.nodes.length;
+  // For every pair iv ≤ iu: the radius-grid cell and fraction of each quadrature node, and the
+  // node weight (ζ is a node of the cylinder table, so only the radius is interpolated).
+  const pairs = ((nL - 1) * nL) / 2;
+  const cell = new Int32Array(pairs * QUADRANT_NODES);
+  const frac = new Float64Array(pairs * QUADRANT_NODES);
+  const weight = new Float64Array(pairs * QUADRANT_NODES);
+  const radii = new Float64Array(QUADRANT_NODES);
+  const w = new Float64Array(QUADRANT_NODES);
+  let pair = 0;
+  for (let iu = 1; iu < nL; iu++)
+    for (let iv = 1; iv <= iu; iv++, pair++) {
+      quadrantQuadrature(lateral.nodes[iu] as number, lateral.nodes[iv] as number, radii, w);
+      for (let k = 0; k < QUADRANT_NODES; k++) {
+        const p = first.radius.position(radii[k] as number);
+        const i = Math.min(Math.floor(p), nS - 2);
+        const o = pair * QUADRANT_NODES + k;
+        cell[o] = i;
+        frac[o] = p - i;
+        weight[o] = w[k] as number;
       }
     }
-  }
-  return { zeta: q.zeta, lateral, values };
+  return qs.map((q) => {
+    const values = new Float64Array(nZ * nL * nL);
+    for (let iz = 0; iz < nZ; iz++) {
+      const row = iz * nS;
+      let pr = 0;
+      for (let iu = 1; iu < nL; iu++)
+        for (let iv = 1; iv <= iu; iv++, pr++) {
+          let c = 0;
+          for (let k = pr * QUADRANT_NODES, end = k + QUADRANT_NODES; k < end; k++) {
+            const i = row + (cell[k] as number);
+            const t = frac[k] as number;
+            c +=
+              (weight[k] as number) *
+              ((1 - t) * (q.values[i] as number) + t * (q.values[i + 1] as number));
+          }
+          values[(iz * nL + iu) * nL + iv] = c;
+          values[(iz * nL + iv) * nL + iu] = c;
+        }
+    }
+    return { zeta: q.zeta, lateral, values };
+  });
 }
 
 /** C(ζ, U, V) for U, V ≥ 0 by trilinear interpolation. */
@@ -189,6 +254,56 @@ export function quadrantSlabAtPositions(
       w01 * (v[b + o00 + 1] as number) +
       w10 * (v[b + o10] as number) +
       w11 * (v[b + o10 + 1] as number);
+    const value = lower + tz * (upper - lower);
+    result += k === 0 ? value : -value;
+  }
+  return result;
+}
+
+/**
+ * As quadrantSlabAtPositions for the table values + f·delta, where `delta` holds a second table
+ * on the same grids (the hardening difference of a kernel, kernelHardening.ts).
+ */
+export function quadrantSlabMixedAtPositions(
+  t: QuadrantTable,
+  delta: Float64Array,
+  f: number,
+  zetaHiPosition: number,
+  zetaLoPosition: number,
+  uPosition: number,
+  vPosition: number,
+): number {
+  const nL = t.lateral.nodes.length;
+  const nZ = t.zeta.nodes.length;
+  const iu = Math.min(Math.floor(uPosition), nL - 2);
+  const iv = Math.min(Math.floor(vPosition), nL - 2);
+  const tu = uPosition - iu;
+  const tv = vPosition - iv;
+  const v = t.values;
+  const plane = nL * nL;
+  const o00 = iu * nL + iv;
+  const o10 = o00 + nL;
+  const w00 = (1 - tu) * (1 - tv);
+  const w01 = (1 - tu) * tv;
+  const w10 = tu * (1 - tv);
+  const w11 = tu * tv;
+  let result = 0;
+  for (let k = 0; k < 2; k++) {
+    const pz = k === 0 ? zetaHiPosition : zetaLoPosition;
+    const iz = Math.min(Math.floor(pz), nZ - 2);
+    const tz = pz - iz;
+    const a = iz * plane;
+    const b = a + plane;
+    const lower =
+      w00 * ((v[a + o00] as number) + f * (delta[a + o00] as number)) +
+      w01 * ((v[a + o00 + 1] as number) + f * (delta[a + o00 + 1] as number)) +
+      w10 * ((v[a + o10] as number) + f * (delta[a + o10] as number)) +
+      w11 * ((v[a + o10 + 1] as number) + f * (delta[a + o10 + 1] as number));
+    const upper =
+      w00 * ((v[b + o00] as number) + f * (delta[b + o00] as number)) +
+      w01 * ((v[b + o00 + 1] as number) + f * (delta[b + o00 + 1] as number)) +
+      w10 * ((v[b + o10] as number) + f * (delta[b + o10] as number)) +
+      w11 * ((v[b + o10 + 1] as number) + f * (delta[b + o10 + 1] as number));
     const value = lower + tz * (upper - lower);
     result += k === 0 ? value : -value;
   }

@@ -1,7 +1,10 @@
 // Beam geometry for the source: a point source at distance SSD above the surface (z = 0), the
-// rectangular field defined at 100 cm from the source, and the pencil beam along the central axis.
+// rectangular field defined at 100 cm from the source, the pencil beam along the central axis,
+// and the contaminant electrons launched along it.
 import { FIELD_DEFINITION_DISTANCE_CM } from '../beam/geometry';
 import type { Rng } from './rng';
+import { sampleContaminantEnergyMeV, type ContaminantSource } from './contaminantSource';
+import type { Transport } from './transport';
 
 /** Entry point on the surface (z = 0) and unit direction of one source ray. */
 export interface SourceRay {
@@ -41,4 +44,19 @@ export function pencilRay(out: SourceRay): void {
   out.u = 0;
   out.v = 0;
   out.w = 1;
+}
+
+/**
+ * After a photon history: the contaminant electrons of the beam (contaminantSource.ts), on
+ * average `electronsPerPhoton`, along the central pencil from the origin.
+ */
+export function launchContaminantElectrons(
+  source: ContaminantSource,
+  transport: Transport,
+  rng: Rng,
+): void {
+  const whole = Math.floor(source.electronsPerPhoton);
+  const n = whole + (rng.next() < source.electronsPerPhoton - whole ? 1 : 0);
+  for (let i = 0; i < n; i++)
+    transport.runElectron(sampleContaminantEnergyMeV(source, rng), 0, 0, 0, 0, 0, 1, 0, rng);
 }

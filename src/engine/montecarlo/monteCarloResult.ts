@@ -132,6 +132,9 @@ export function finalizeMonteCarlo(
       `${histories} histories in ${acc.completed} of ${plan.batches} batches, seed ${plan.seed}`,
       varianceNote(plan),
       spectrum.approximate ? 'spectrum approximate (derived stand-in)' : 'published spectrum',
+      caseScenario.parallel
+        ? 'no contaminant electrons'
+        : 'contaminant electrons of the modelled beam',
     ].join('; '),
     methodClass: 'type C',
     waterData: 'not used (Monte Carlo from spectra and cross sections)',

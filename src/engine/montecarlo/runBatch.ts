@@ -6,7 +6,8 @@ import { slabGeometry } from './geometry';
 import { Transport, type EnergyTally, type TransportOptions } from './transport';
 import { DepthDoseScorer } from './depthDoseScorer';
 import { makeSpectrumSampler } from './spectrumSampler';
-import { pencilRay, type SourceRay } from './beamSource';
+import { launchContaminantElectrons, pencilRay, type SourceRay } from './beamSource';
+import { contaminantSourceOf } from './contaminantSource';
 import { Rng } from './rng';
 import { scoringGrid, type McBinning, type McScenario } from './scenario';
 import { ChargedRoulette } from './chargedRoulette';
@@ -45,6 +46,7 @@ export function runBatch(task: BatchTask): BatchTally {
     task.variance ? new ChargedRoulette(phantom, task.variance) : undefined,
   );
   const spectrum = makeSpectrumSampler(task.scenario.energy);
+  const electrons = contaminantSourceOf(task.scenario);
   const rng = new Rng(task.seed, 0);
   const ray: SourceRay = { x: 0, y: 0, u: 0, v: 0, w: 1 };
   pencilRay(ray);
@@ -67,6 +69,7 @@ export function runBatch(task: BatchTask): BatchTally {
     const e = spectrum.sample(rng);
     if (forced) forced.run(transport, e, rng);
     else transport.runPhoton(e, ray.x, ray.y, 0, ray.u, ray.v, ray.w, 0, rng);
+    if (electrons) launchContaminantElectrons(electrons, transport, rng);
   }
   return {
     batchIndex: task.batchIndex,

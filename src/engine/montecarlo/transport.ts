@@ -86,6 +86,23 @@ export class Transport implements ElectronContext {
     this.drain(rng);
   }
 
+  /** Transports one incident electron (a contaminant of the beam) and everything it sets in motion. */
+  runElectron(
+    energyMeV: number,
+    x: number,
+    y: number,
+    z: number,
+    u: number,
+    v: number,
+    w: number,
+    region: number,
+    rng: Rng,
+  ): void {
+    this.tally.incidentMeV += energyMeV;
+    this.stack.push(ELECTRON, energyMeV, x, y, z, u, v, w, region, false);
+    this.drain(rng);
+  }
+
   /** Forces the first interaction of a photon at (x, y, z) (kernel generation), then transports all. */
   runForcedInteraction(
     energyMeV: number,

@@ -2,15 +2,17 @@
 // lateral radius s from an infinitesimally narrow beam, stored as the radial cumulative
 // P(d, S) = ∫₀^S p(d, s)·2πs ds (Q: cylinder-cumulative point kernel, T_w: water TERMA of a
 // parallel beam per energy bin, source cells [a, b]).
-// The kernel is divergent for the reference SSD f (100 cm), as kernels derived from SSD-100 water
-// data are (Ahnesjö, Saxner & Trepp, Med. Phys. 19, 263 (1992), from memory): with lateral
-// coordinates measured in the plane of the dose depth d, a source plane at z′ is seen shrunk by
-// k = (f + z′)/(f + d), so its contribution within S is Q(·, k·S), and its TERMA carries the
-// inverse-square factor w_IS = ((f + d)/(f + z′))² relative to the dose depth. At SSD 100 in
-// water this reproduces the divergent superposition exactly (up to interpolation).
-//   P(d, S) = Σ_cells T_w(z′)·w_IS·[Q(d − a, k·S) − Q(d − b, k·S)]
+// Kernels tilt along the divergent rays as in the superposition (slabSuperposition.ts): to first
+// order a source plane at z′ is then integrated over the field projected to the dose depth, with
+// its energy spread over that area, so the pencil of a divergent beam is the parallel-beam pencil
+// scaled by the inverse square at the dose depth (pencilBeam.ts applies it) — the same for every
+// SSD. Each cell's kernel is hardened by its depth, K(t) ≈ K(0) + f(t)·[K(t_ref) − K(0)]
+// (kernelHardening.ts):
+//   P(d, S) = Σ_cells T_w(z′)·[Q_t(d − a, S) − Q_t(d − b, S)],  t = z′ (cell centre)
+// In water this reproduces the tilted, hardened superposition (up to interpolation).
 import { bracketIndex } from '../units';
 import { cylinderAt, type CylinderCumulative } from '../kernels/cylinderCumulative';
+import { hardeningMixAt, type HardeningMix } from '../kernels/kernelHardening';
 import { termaAlongRay } from '../kernels/terma';
 import type { Spectrum } from '../kernels/spectrum';
 import { waterPhantom } from '../phantom/slabPhantom';
@@ -23,28 +25,32 @@ export interface PencilKernelTable {
   radiiCm: Float64Array;
   /** P(d, S) per unit energy fluence (cm²/g · cm²), index iDepth · nRadii + iRadius. */
   values: Float64Array;
-  referenceSsdCm: number;
 }
 
 export interface PencilKernelOptions {
   cellStepCm?: number;
   /** Thickness of the water phantom the kernel is computed in (cm). */
   phantomDepthCm?: number;
-  referenceSsdCm?: number;
+}
+
+/** Cylinder-cumulative kernels released at the surface (base) and behind t_ref of water. */
+export interface HardeningCylinders {
+  base: CylinderCumulative;
+  hardened: CylinderCumulative;
 }
 
 export function buildPencilKernel(
-  q: CylinderCumulative,
+  q: HardeningCylinders,
+  mix: HardeningMix,
   spectrum: Spectrum,
   depthsCm: ArrayLike<number>,
   radiiCm: ArrayLike<number>,
   options: PencilKernelOptions = {},
 ): PencilKernelTable {
-  const ref = options.referenceSsdCm ?? 100;
   const phantom = waterPhantom(options.phantomDepthCm ?? 80);
   const cells = sourceCells(phantom, options.cellStepCm ?? 0.1);
   const terma = termaAlongRay(phantom, spectrum, cells.centreCm, { ssdCm: Infinity });
-  const extent = q.zeta.nodes[q.zeta.nodes.length - 1] as number;
+  const extent = q.base.zeta.nodes[q.base.zeta.nodes.length - 1] as number;
   const nD = depthsCm.length;
   const nR = radiiCm.length;
   const values = new Float64Array(nD * nR);
@@ -54,12 +60,13 @@ export function buildPencilKernel(
       const hi = d - (cells.topCm[c] as number);
       const lo = d - (cells.bottomCm[c] as number);
       if (lo >= extent || hi <= -extent) continue;
-      const k = (ref + (cells.centreCm[c] as number)) / (ref + d);
-      const w = (terma[c] as number) / (k * k);
+      const w = terma[c] as number;
+      const f = hardeningMixAt(mix, cells.centreCm[c] as number);
       for (let ir = 1; ir < nR; ir++) {
-        const s = k * (radiiCm[ir] as number);
-        values[id * nR + ir] =
-          (values[id * nR + ir] as number) + w * (cylinderAt(q, hi, s) - cylinderAt(q, lo, s));
+        const s = radiiCm[ir] as number;
+        const base = cylinderAt(q.base, hi, s) - cylinderAt(q.base, lo, s);
+        const hard = cylinderAt(q.hardened, hi, s) - cylinderAt(q.hardened, lo, s);
+        values[id * nR + ir] = (values[id * nR + ir] as number) + w * (base + f * (hard - base));
       }
     }
   }
@@ -67,7 +74,6 @@ export function buildPencilKernel(
     depthsCm: Float64Array.from(depthsCm),
     radiiCm: Float64Array.from(radiiCm),
     values,
-    referenceSsdCm: ref,
   };
 }
 

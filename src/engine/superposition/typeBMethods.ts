@@ -3,7 +3,7 @@
 import type { BeamEnergy } from '../beam/energies';
 import type { MethodResult } from '../methodResult';
 import { radiologicalDepthCm, waterPhantom, type SlabPhantom } from '../phantom/slabPhantom';
-import { KERNEL_FORMAT_DATE_OF_DATA, typeBModel } from './beamModel';
+import { kernelFormatDate, typeBModel } from './beamModel';
 import { typeBDosePerMu, referencePoint, type TypeBEngine } from './typeBDose';
 import type { SlabBeam } from './slabSuperposition';
 import { depthConversionFactors, nativeDoseQuantity } from '../dose/doseConversion';
@@ -24,19 +24,19 @@ const LABELS: Record<TypeBEngine, string> = {
 
 const VARIANTS: Record<TypeBEngine, string> = {
   superposition:
-    'Monte Carlo point kernel, rectilinear density scaling, TERMA per energy bin (kernel not hardened); photon-only, no contaminant electrons; 1 cGy/MU at d_max, 10 × 10, SSD 100',
+    'Monte Carlo point kernel tilted along the rays and hardened with depth, rectilinear density scaling, TERMA per energy bin; contaminant electrons (fitted surface doses); 1 cGy/MU at d_max, 10 × 10, SSD 100',
   'pencil-beam':
-    'Pencil kernel from the Monte Carlo point kernel, read at radiological depth, lateral spread unscaled; photon-only, no contaminant electrons; 1 cGy/MU at d_max, 10 × 10, SSD 100',
+    'Pencil kernel from the Monte Carlo point kernel (hardened with depth), read at radiological depth, lateral spread unscaled; contaminant electrons (fitted surface doses); 1 cGy/MU at d_max, 10 × 10, SSD 100',
 };
 
 /** The water-data string printed with type-B results. */
 export function modelledBeamSource(energy: BeamEnergy): string {
-  return `modelled beam (${energy}, generated ${KERNEL_FORMAT_DATE_OF_DATA})`;
+  return `modelled beam (${energy}, generated ${kernelFormatDate()})`;
 }
 
 function pointFlags(engine: TypeBEngine, input: TypeBInput, depthCm: number, dMaxCm: number) {
   const flags: string[] = [];
-  if (depthCm < dMaxCm) flags.push('build-up region (photon-only kernel)');
+  if (depthCm < dMaxCm) flags.push('build-up region (fitted contaminant-electron model)');
   if (engine === 'pencil-beam') {
     const depths = typeBModel(input.energy).pencil.depthsCm;
     if (radiologicalDepthCm(input.phantom, depthCm) > (depths[depths.length - 1] as number))

@@ -19,9 +19,10 @@ export function McExplanation() {
           other methods only by its heterogeneity physics.
         </li>
         <li>
-          Does not model: the treatment head (no flattening filter, jaws or head scatter beyond the
-          S_c factor), contaminant electrons (build-up doses are too low), or off-axis softening;
-          the phantom is laterally infinite slabs.
+          Does not model the treatment head (no flattening filter, jaws or head scatter beyond the
+          S_c factor) or off-axis softening; contaminant electrons from the head are launched with
+          the photons from the modelled beam's fitted model (surface and build-up doses). The
+          phantom is laterally infinite slabs.
         </li>
         <li>
           Uncertainty is statistical only, shown as 1σ (batch method): it shrinks as 1/√histories.

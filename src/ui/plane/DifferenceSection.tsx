@@ -1,7 +1,8 @@
 // The difference between two methods' dose planes, (A − B) in % of B's central-axis maximum, on
 // B's grid (A resampled bilinearly when the grids differ), as a diverging colour map.
 import { useMemo, useState } from 'react';
-import { interpolateRdBu, scaleLinear } from 'd3';
+import { scaleLinear } from 'd3-scale';
+import { interpolateRdBu } from 'd3-scale-chromatic';
 import { centralAxisMax, planeDifferencePercent, type PlaneGrid } from '../../plots/planeGrid';
 import { MethodSelect } from './MethodSelect';
 import { PlaneMap } from './PlaneMap';

@@ -2,7 +2,7 @@
 // lines under the slab strip (same depth axis), lateral profiles of every method at a chosen depth,
 // and the difference between two methods in % of the reference method's central-axis maximum.
 import { useMemo, useState } from 'react';
-import { interpolateViridis } from 'd3';
+import { interpolateViridis } from 'd3-scale-chromatic';
 import { toCaseFile, boundariesCm, totalThicknessCm } from '../../state/editorCase';
 import { useAppStore } from '../../state/store';
 import { useMonteCarloStore } from '../../state/monteCarloStore';

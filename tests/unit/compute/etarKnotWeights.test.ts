@@ -9,6 +9,7 @@ import { validateCase } from '../../../src/io/caseFile';
 import { makeSlabPhantom } from '../../../src/engine/phantom/slabPhantom';
 import { PRESETS } from '../../../src/state/presets';
 import { expectRelClose } from '../../helpers/expectClose';
+import { modelledWaterData } from '../../../src/engine/beam/modelledBeam';
 
 describe('knotDepthsCm', () => {
   it('holds the surface, every interface and the bottom, with no gap wider than the step', () => {
@@ -52,7 +53,8 @@ describe('knotInterpolatedWeights', () => {
 });
 
 describe('ETAR with knot-interpolated weights (drag preview)', () => {
-  it('stays within 0.5 % of the exact-weight CF on every preset', () => {
+  it('stays within 0.5 % of the exact-weight CF on every preset (1 % in the build-up)', () => {
+    const dMaxCm = modelledWaterData('6MV').dMaxCm; // every preset is 6 MV
     for (const preset of PRESETS) {
       const v = validateCase(preset.make());
       if (!v.ok) throw new Error(`preset ${preset.id} does not validate`);
@@ -69,8 +71,11 @@ describe('ETAR with knot-interpolated weights (drag preview)', () => {
           expect(a ?? null).toBe(e);
           return;
         }
-        // Preview only: measured worst 0.34 % (rib); 0.5 % keeps it below a pixel on the chart.
-        expectRelClose(a, e, 5e-3);
+        // Preview only: beyond d_max measured worst 0.32 % (rib); 0.5 % keeps it below a pixel
+        // on the chart. In the build-up the modelled TMR carries the contaminant electrons' field
+        // dependence (surface dose 9 % at 5 × 5, 27 % at 20 × 20, 6 MV), so an error in ρ̃ counts
+        // more there: worst 0.81 % (sinus, 0.2 cm); 1 % there.
+        expectRelClose(a, e, exact.curve.depthCm[i]! < dMaxCm ? 1e-2 : 5e-3);
       });
     }
   });

@@ -75,7 +75,7 @@ describe('monteCarloCalibration', () => {
     const cal = monteCarloCalibration(c, waterOf(c, 'case'));
     // 20 cm is a tabulated field of the modelled data, which samples the same curve: only the
     // table's 5-digit rounding separates them.
-    expectRelClose(cal.collimatorScatterFactor, modelledHeadScatter(20), 1e-4);
+    expectRelClose(cal.collimatorScatterFactor, modelledHeadScatter('6MV', 20), 1e-4);
   });
 
   it("is CF × water with the case's measured table", () => {

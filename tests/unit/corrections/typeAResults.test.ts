@@ -3,7 +3,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { calculateCase } from '../../../src/compute/calculateCase';
-import { NEEDS_WATER_DATA } from '../../../src/compute/typeAForCase';
+import { NEEDS_WATER_DATA } from '../../../src/contract/reports';
 import { TYPE_A_METHOD_IDS } from '../../../src/engine/corrections/typeAMethods';
 import { buildMeasuredWaterData } from '../../../src/engine/beam/measuredTable';
 import { dosePerMuFactors } from '../../../src/engine/check/dosePerMu';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import monoJson from '../../../src/engine/data/generated/pointKernelsMono.json';
+import { readTypedArrayFileSync } from '../../../src/io/generatedDataNode';
 import type { MonoKernelFile } from '../../../src/engine/kernels/kernelFiles';
 import { BEAM_ENERGIES } from '../../../src/engine/beam/energies';
 import { beamPointKernel } from '../../../src/engine/superposition/beamModel';
@@ -12,7 +12,9 @@ import { kernelWeights, type MonoKernel } from '../../../src/engine/kernels/poly
 import { beamSpectrum, monoenergeticSpectrum } from '../../../src/engine/kernels/spectrum';
 import { expectAbsClose, expectRelClose } from '../../helpers/expectClose';
 
-const MONO = monoJson as unknown as MonoKernelFile;
+const MONO = readTypedArrayFileSync(
+  'src/engine/data/generated/pointKernelsMono.bin',
+) as MonoKernelFile;
 const monoKernels: MonoKernel[] = MONO.kernels.map((k) => ({
   label: `${k.energyMeV} MeV`,
   energyMeV: k.energyMeV,

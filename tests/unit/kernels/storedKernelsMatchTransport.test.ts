@@ -5,11 +5,13 @@
 // kernel shows up first as too little lateral electron disequilibrium in lung for small
 // high-energy fields (superposition above the Monte Carlo inside the lung).
 import { describe, expect, it } from 'vitest';
-import monoJson from '../../../src/engine/data/generated/pointKernelsMono.json';
+import { readTypedArrayFileSync } from '../../../src/io/generatedDataNode';
 import type { MonoKernelFile } from '../../../src/engine/kernels/kernelFiles';
 import { simulatePointKernel } from '../../../src/engine/montecarlo/pointKernel';
 
-const MONO = monoJson as unknown as MonoKernelFile;
+const MONO = readTypedArrayFileSync(
+  'src/engine/data/generated/pointKernelsMono.bin',
+) as MonoKernelFile;
 
 /**
  * Energy-weighted mean lateral distance r·sin θ (cm) of one kernel component, with bin centres
