@@ -21,6 +21,9 @@ export interface DecidingDifference {
   verdict: Verdict;
 }
 
+/** Relative margin within which two differences count as equal (rounding, not a difference). */
+const TIE_RELATIVE = 1e-9;
+
 /** Where nothing could be compared: what is missing at each beam and point. */
 export interface MissingAt {
   beamId: string;
@@ -66,11 +69,18 @@ export function decidingDifferenceOf(check: CheckCore): DecidingDifference | nul
     if (m && t.missingInBeams.length === 0 && check.beams.length > 1)
       add('total-dose', null, t.pointId, m.diffPercent, m.sigma?.diffPercent, t.tolerancePercent);
   }
+  // The first of equal candidates (in beam and point order) decides: a later one must be larger by
+  // more than rounding (TIE_RELATIVE), so points the same to the last bits (two points at the
+  // surface) do not swap between two runs that round differently (page and command line).
   let best: DecidingDifference | null = null;
+  let bestRatio = 0;
   for (const c of candidates) {
     if (c.verdict !== check.verdict) continue;
     const r = Math.abs(c.percent) / c.tolerancePercent;
-    if (best === null || r > Math.abs(best.percent) / best.tolerancePercent) best = c;
+    if (best === null || r > bestRatio * (1 + TIE_RELATIVE)) {
+      best = c;
+      bestRatio = r;
+    }
   }
   return best;
 }
