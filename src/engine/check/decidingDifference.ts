@@ -66,14 +66,14 @@ export function decidingDifferenceOf(check: CheckCore): DecidingDifference | nul
     if (m && t.missingInBeams.length === 0 && check.beams.length > 1)
       add('total-dose', null, t.pointId, m.diffPercent, m.sigma?.diffPercent, t.tolerancePercent);
   }
+  // The first of equal candidates (in beam and point order) decides: a later one must be larger by
+  // more than rounding (TIE_RELATIVE), so points the same to the last bits (two points at the
+  // surface) do not swap between two runs that round differently (page and command line).
   let best: DecidingDifference | null = null;
   let bestRatio = 0;
   for (const c of candidates) {
     if (c.verdict !== check.verdict) continue;
     const r = Math.abs(c.percent) / c.tolerancePercent;
-    // Ratios within rounding of each other are a tie, kept by the first in beam and point order:
-    // the page's engine (Chromium) and the CLI's (Node) may differ in the last bits of the same
-    // number, and must still name the same beam and point.
     if (best === null || r > bestRatio * (1 + TIE_RELATIVE)) {
       best = c;
       bestRatio = r;

@@ -198,3 +198,46 @@ describe('the deciding difference and the spread', () => {
     );
   });
 });
+
+describe('the deciding difference between equal points', () => {
+  // Two points at the same place whose doses per MU differ only in the last bits (rounding): the
+  // first point decides whichever rounds larger, so page and command line name the same point.
+  const twoPoints = (a: number, b: number): CheckBeamInput => ({
+    id: 'AP',
+    label: 'AP',
+    weight: 1,
+    planningMu: 100,
+    layers: WATER,
+    points: [
+      { id: 'P2', depthCm: 0, planningDoseCGy: 100 },
+      { id: 'P3', depthCm: 0, planningDoseCGy: 100 },
+    ],
+    methods: [
+      {
+        id: 'rtmr',
+        label: 'rtmr',
+        points: [
+          { id: 'P2', dosePerMuCGy: a },
+          { id: 'P3', dosePerMuCGy: b },
+        ],
+      },
+    ],
+  });
+
+  it('names the first point when the two differ by rounding only, in either order', () => {
+    const v = 0.5;
+    const w = v * (1 + 4e-16);
+    for (const [a, b] of [
+      [v, w],
+      [w, v],
+    ] as const) {
+      const r = checkPlan([twoPoints(a, b)], { tolerances: DEFAULT_TOLERANCES });
+      expect(r.decidingDifference?.pointId).toBe('P2');
+    }
+  });
+
+  it('names the later point when its difference is really larger', () => {
+    const r = checkPlan([twoPoints(0.5, 0.45)], { tolerances: DEFAULT_TOLERANCES });
+    expect(r.decidingDifference?.pointId).toBe('P3');
+  });
+});
