@@ -15,6 +15,8 @@ import { calcDocumentOf } from '../../compute/calcDocument';
 import type { CheckView } from './useCheck';
 
 const CSV = 'text/csv;charset=utf-8';
+/** Why a record is not offered while the check recalculates: it would hold the previous input's numbers. */
+const STALE_TITLE = 'Recalculating: available when the check shows the current input';
 
 export function ExportBar({
   view,
@@ -85,11 +87,18 @@ export function ExportBar({
         <button type="button" onClick={() => window.print()}>
           Print
         </button>
-        <button type="button" disabled={busy} onClick={() => void pdf()}>
+        <button
+          type="button"
+          disabled={busy || view.pending}
+          title={view.pending ? STALE_TITLE : undefined}
+          onClick={() => void pdf()}
+        >
           {busy ? 'Writing PDF…' : 'Download PDF'}
         </button>
         <button
           type="button"
+          disabled={view.pending}
+          title={view.pending ? STALE_TITLE : undefined}
           onClick={() =>
             downloadText(pointCheckCsv(view.check), `lamina-check-points-${stamp}.csv`, CSV)
           }
@@ -99,6 +108,8 @@ export function ExportBar({
         {isPlan ? (
           <button
             type="button"
+            disabled={view.pending}
+            title={view.pending ? STALE_TITLE : undefined}
             onClick={() =>
               downloadText(totalCheckCsv(view.check), `lamina-check-totals-${stamp}.csv`, CSV)
             }
@@ -109,6 +120,8 @@ export function ExportBar({
         {first ? (
           <button
             type="button"
+            disabled={view.pending}
+            title={view.pending ? STALE_TITLE : undefined}
             onClick={() => downloadText(curvesCsv(first.report), `lamina-curves-${stamp}.csv`, CSV)}
           >
             CSV: curves
