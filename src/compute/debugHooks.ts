@@ -3,7 +3,9 @@
 // `killComputeWorkerDuringNextCalculation()` stops it right after the next request is sent (a
 // crash mid-run), `computeWorkerStarts()` counts the workers started, `killMonteCarloWorkers()`
 // stops the workers of a running Monte Carlo run, `speculation()` counts the previews prepared
-// for a held boundary and the edits drawn from them. Nothing here runs otherwise.
+// for a held boundary and the edits drawn from them, `chartDraws()` counts each chart's layouts
+// (and those that repeated the previous one unchanged). Nothing here runs otherwise.
+import { chartDrawCounts, enableDrawStats, type ChartDrawCount } from '../state/drawStats';
 import { speculationStats } from '../state/speculation';
 import { computeWorker } from './computeClient';
 
@@ -15,6 +17,8 @@ export interface LaminaDebug {
   killMonteCarloWorkers(): Promise<number>;
   /** Previews prepared for a held boundary, and edits drawn from a ready preview. */
   speculation(): { prepared: number; hits: number };
+  /** Layouts of each chart (by test id) since the hooks were installed, and repeated ones. */
+  chartDraws(): Record<string, ChartDrawCount>;
 }
 
 export function debugFlagIsSet(search: string): boolean {
@@ -24,6 +28,7 @@ export function debugFlagIsSet(search: string): boolean {
 /** Registers `window.__laminaDebug` when the address asks for it; returns whether it did. */
 export function installDebugHooks(): boolean {
   if (typeof window === 'undefined' || !debugFlagIsSet(window.location.search)) return false;
+  enableDrawStats();
   const hooks: LaminaDebug = {
     killComputeWorker: () =>
       computeWorker.terminate('The compute worker was stopped (debug action).'),
@@ -33,6 +38,7 @@ export function installDebugHooks(): boolean {
       ),
     computeWorkerStarts: () => computeWorker.starts(),
     speculation: () => ({ ...speculationStats }),
+    chartDraws: chartDrawCounts,
     // Imported on use, so the Monte Carlo pool stays out of the page's first bundle.
     killMonteCarloWorkers: async () =>
       (await import('./mcPool')).terminateMonteCarloWorkers(

@@ -1,7 +1,7 @@
 // Layout of a chart of curves against depth: scales, ticks, one path per series (gaps where a
 // value is null), ±1σ bands, warning bands and layer shading. Pure: numbers in, drawables out.
 import { scaleLinear, type ScaleLinear } from 'd3-scale';
-import { area, line } from 'd3-shape';
+import { area } from 'd3-shape';
 import {
   depthScale,
   depthTicks,
@@ -10,6 +10,7 @@ import {
   type PlotFrame,
   type Tick,
 } from './depthAxis';
+import { polylinePath } from './polylinePath';
 
 export interface CurveSeries {
   id: string;
@@ -92,7 +93,8 @@ export function spikeLimit(series: readonly CurveSeries[]): number | null {
   let typical = -Infinity;
   let max = -Infinity;
   for (const s of series) {
-    const v = s.values.filter(isNum).sort((a, b) => a - b);
+    // A typed array sorts numerically without a comparator callback.
+    const v = Float64Array.from(s.values.filter(isNum)).sort();
     if (v.length === 0) continue;
     typical = Math.max(typical, v[Math.floor(0.95 * (v.length - 1))] as number);
     max = Math.max(max, v[v.length - 1] as number);
@@ -117,20 +119,15 @@ export function curveChartLayout(input: CurveChartInput): CurveChartLayout {
     .map((s) => ({ id: s.id, label: s.label, maxValue: Math.max(...s.values.filter(isNum)) }))
     .filter((c) => c.maxValue > yTop);
   const depth = input.depthCm;
-  const curves = input.series.map((s) => {
-    const gen = line<number>()
-      .defined((i) => isNum(s.values[i]))
-      .x((i) => x(depth[i] ?? 0))
-      .y((i) => y(s.values[i] ?? 0))
-      .digits(1);
-    return {
-      id: s.id,
-      label: s.label,
-      color: s.color,
-      dash: s.dash,
-      d: gen(depth.map((_, i) => i)) ?? '',
-    };
-  });
+  // One x pixel per depth, shared by every curve.
+  const xPx = Float64Array.from(depth, (z) => x(z));
+  const curves = input.series.map((s) => ({
+    id: s.id,
+    label: s.label,
+    color: s.color,
+    dash: s.dash,
+    d: polylinePath(xPx, s.values, y),
+  }));
   const sigmaBands = input.series
     .filter((s) => s.sigma && s.sigma.length === depth.length)
     .map((s) => {

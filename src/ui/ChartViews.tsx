@@ -10,7 +10,7 @@ import { MethodLegend } from './MethodLegend';
 import { PointTable } from './PointTable';
 import { cfSeries, doseSeries, methodStyles } from './series';
 import { WarningList } from './WarningList';
-import { nearestIndex } from '../plots/curveLayout';
+import { nearestIndex, type CurveSeries } from '../plots/curveLayout';
 import { curvesCsv } from '../io/csvExport';
 import { downloadText } from './download';
 
@@ -35,27 +35,60 @@ function depthDescriber(report: CalcReport): (depthCm: number) => string {
   };
 }
 
+/** Radiological against geometric depth: the path's curve over the water diagonal. */
+function radiologicalSeries(report: CalcReport): CurveSeries[] {
+  return [
+    {
+      id: 'geometric',
+      label: 'Water (geometric depth)',
+      color: '#888888',
+      dash: '3 3',
+      values: report.depthCm,
+    },
+    {
+      id: 'radiological',
+      label: 'This path',
+      color: 'currentColor',
+      dash: '',
+      values: report.radiologicalDepthCm,
+    },
+  ];
+}
+
 function maxDepthOf(report: CalcReport): number {
   return report.layers[report.layers.length - 1]?.bottomCm ?? 1;
 }
 
 /**
- * The report for the tables under a chart (point values, warnings): deferred, so an edit's frame
- * draws the curves first and the tables follow in the next idle moment.
+ * The tables under a chart (point values, warnings) take the report deferred, so an edit's frame
+ * draws the curves first and the tables follow in the next idle moment. The deferral lives in
+ * these small components: the deferred render re-renders the tables only, not the views and
+ * their charts (which the urgent render has already drawn).
  */
-function useTableReport(report: CalcReport) {
+const DeferredPointTable = memo(function DeferredPointTable({ report }: { report: CalcReport }) {
+  return <PointTable report={useDeferredValue(report)} />;
+});
+
+const DeferredWarningList = memo(function DeferredWarningList({ report }: { report: CalcReport }) {
   const slow = useDeferredValue(report);
   const warnings = useMemo(() => displayWarnings(slow.warnings), [slow]);
-  return { slow, warnings };
-}
+  return <WarningList warnings={warnings} />;
+});
 
-function useWarningBands(report: CalcReport) {
+/** y values every chart of its kind keeps on its axis (constants: the chart's props stay equal). */
+const INCLUDE_ZERO: readonly number[] = [0];
+const INCLUDE_ONE: readonly number[] = [1];
+
+/**
+ * What a view's charts draw besides the curves, computed once per report (and filter): the
+ * charts are memoised and redraw only when one of these changes.
+ */
+function useChartFrame(report: CalcReport) {
   const hidden = useAppStore((s) => s.hiddenWarningMethods);
   const hiddenMethods = useAppStore((s) => s.hiddenMethods);
-  const all = displayWarnings(report.warnings);
-  const shown = visibleWarnings(all, [...hidden, ...hiddenMethods]);
-  return {
-    bands: shown
+  const bands = useMemo(() => {
+    const all = displayWarnings(report.warnings);
+    return visibleWarnings(all, [...hidden, ...hiddenMethods])
       .filter((w) => w.range)
       .map((w) => ({
         key: w.key,
@@ -63,8 +96,18 @@ function useWarningBands(report: CalcReport) {
         toCm: w.range!.toCm,
         severity: w.severity,
         title: `${w.code} (${w.severity}): ${w.message}${w.numbers ? `\n${w.numbers}` : ''}`,
-      })),
-  };
+      }));
+  }, [report, hidden, hiddenMethods]);
+  const fixed = useMemo(
+    () => ({
+      interfaces: interfacesOf(report),
+      maxDepth: maxDepthOf(report),
+      describeDepth: depthDescriber(report),
+      styles: methodStyles(report),
+    }),
+    [report],
+  );
+  return { bands, ...fixed };
 }
 
 // Memoised: an edit re-renders the workbench around these views, but they change only with the
@@ -79,14 +122,13 @@ export const DoseView = memo(function DoseView({
   const hidden = useAppStore((s) => s.hiddenMethods);
   const updatingIds = useAppStore((s) => s.calc.updatingMethodIds);
   const mode = useAppStore((s) => s.normalisation);
-  const { bands } = useWarningBands(report);
-  const tables = useTableReport(report);
-  const s = doseSeries(report, hidden, mode);
+  const f = useChartFrame(report);
+  const s = useMemo(() => doseSeries(report, hidden, mode), [report, hidden, mode]);
   return (
     <div className="view">
       {report.methods.length > 0 ? (
         <div className="chart-controls">
-          <MethodLegend methods={report.methods} styles={methodStyles(report)} />
+          <MethodLegend methods={report.methods} styles={f.styles} />
           <div className="field">
             <button
               type="button"
@@ -123,22 +165,22 @@ export const DoseView = memo(function DoseView({
           title="Central-axis depth dose, one curve per method"
           testId="dose-chart"
           depthCm={report.depthCm}
-          maxDepthCm={maxDepthOf(report)}
+          maxDepthCm={f.maxDepth}
           series={s.series}
           axisLabel={s.axisLabel}
           width={width}
           height={320}
-          interfacesCm={interfacesOf(report)}
-          bands={bands}
+          interfacesCm={f.interfaces}
+          bands={f.bands}
           points={report.points}
           digits={mode === 'percentWaterDmax' ? 1 : 3}
-          describeDepth={depthDescriber(report)}
-          yInclude={mode === 'relativeToWater' ? [1] : [0]}
+          describeDepth={f.describeDepth}
+          yInclude={mode === 'relativeToWater' ? INCLUDE_ONE : INCLUDE_ZERO}
           updatingIds={updatingIds}
         />
       ) : null}
-      <PointTable report={tables.slow} />
-      <WarningList warnings={tables.warnings} />
+      <DeferredPointTable report={report} />
+      <DeferredWarningList report={report} />
     </div>
   );
 });
@@ -152,68 +194,52 @@ export const CfView = memo(function CfView({
 }) {
   const hidden = useAppStore((s) => s.hiddenMethods);
   const updatingIds = useAppStore((s) => s.calc.updatingMethodIds);
-  const { bands } = useWarningBands(report);
-  const tables = useTableReport(report);
-  const interfaces = interfacesOf(report);
-  const maxDepth = maxDepthOf(report);
+  const f = useChartFrame(report);
+  const series = useMemo(() => cfSeries(report, hidden), [report, hidden]);
+  const radiological = useMemo(() => radiologicalSeries(report), [report]);
   return (
     <div className="view">
       {report.methods.length > 0 ? (
         <>
           <div className="chart-controls">
-            <MethodLegend methods={report.methods} styles={methodStyles(report)} />
+            <MethodLegend methods={report.methods} styles={f.styles} />
           </div>
           <CurveChart
             title="Correction factor against depth, one curve per method"
             testId="cf-chart"
             depthCm={report.depthCm}
-            maxDepthCm={maxDepth}
-            series={cfSeries(report, hidden)}
+            maxDepthCm={f.maxDepth}
+            series={series}
             axisLabel="Correction factor D_het / D_water"
             width={width}
             height={280}
-            interfacesCm={interfaces}
-            bands={bands}
+            interfacesCm={f.interfaces}
+            bands={f.bands}
             points={report.points}
             digits={3}
-            yInclude={[1]}
-            describeDepth={depthDescriber(report)}
+            yInclude={INCLUDE_ONE}
+            describeDepth={f.describeDepth}
             updatingIds={updatingIds}
           />
-          <PointTable report={tables.slow} />
+          <DeferredPointTable report={report} />
         </>
       ) : null}
       <CurveChart
         title="Radiological (water-equivalent) depth against geometric depth"
         testId="radiological-chart"
         depthCm={report.depthCm}
-        maxDepthCm={maxDepth}
-        series={[
-          {
-            id: 'geometric',
-            label: 'Water (geometric depth)',
-            color: '#888888',
-            dash: '3 3',
-            values: report.depthCm,
-          },
-          {
-            id: 'radiological',
-            label: 'This path',
-            color: 'currentColor',
-            dash: '',
-            values: report.radiologicalDepthCm,
-          },
-        ]}
+        maxDepthCm={f.maxDepth}
+        series={radiological}
         axisLabel="Radiological depth (cm)"
         legend
         width={width}
         height={220}
-        interfacesCm={interfaces}
+        interfacesCm={f.interfaces}
         points={report.points}
         digits={2}
-        yInclude={[0]}
+        yInclude={INCLUDE_ZERO}
       />
-      <WarningList warnings={tables.warnings} />
+      <DeferredWarningList report={report} />
     </div>
   );
 });

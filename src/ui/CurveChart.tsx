@@ -1,14 +1,16 @@
 // A chart of curves against depth (thin renderer over curveChartLayout): layer shading, warning
 // bands, ±1σ bands, one path per series, points of interest, and a crosshair readout that
 // lists every series' value at the hovered depth (pointer or arrow keys).
-import { useId, useState, type KeyboardEvent, type PointerEvent } from 'react';
+import { memo, useId, useMemo, useState, type KeyboardEvent, type PointerEvent } from 'react';
 import { flushSync } from 'react-dom';
 import {
   curveChartLayout,
   nearestIndex,
+  type CurveChartLayout,
   type CurveSeries,
   type DepthBand,
 } from '../plots/curveLayout';
+import { noteChartLayout } from '../state/drawStats';
 import { SIDE_MARGIN } from './frame';
 import { labelRows } from '../plots/labelRows';
 import { ChartLegend, LineSwatch } from './LineSwatch';
@@ -38,21 +40,31 @@ export interface CurveChartProps {
   updatingIds?: readonly string[];
 }
 
-export function CurveChart(props: CurveChartProps) {
-  const frame = {
-    width: props.width,
-    height: props.height,
-    margin: { ...SIDE_MARGIN, top: 12, bottom: 40 },
-  };
-  const layout = curveChartLayout({
-    depthCm: props.depthCm,
-    maxDepthCm: props.maxDepthCm,
-    series: props.series,
-    frame,
-    interfacesCm: props.interfacesCm,
-    bands: props.bands,
-    yInclude: props.yInclude,
-  });
+/** What a layout draws, for the redraw counters (src/state/drawStats). */
+function layoutSignature(l: CurveChartLayout, width: number, height: number): string {
+  const bands = l.bands.map((b) => `${b.key}:${b.x}:${b.width}`).join(',');
+  const curves = l.curves.map((c) => `${c.id}:${c.color}:${c.dash}:${c.d}`).join('|');
+  return `${width}x${height};${l.y.domain().join(',')};${l.interfaces.join(',')};${bands};${curves}`;
+}
+
+// Memoised, and the layout (scales, ticks, one path string per curve) kept until its inputs
+// change: a hover readout, a legend or status change elsewhere redraws no curve.
+export const CurveChart = memo(function CurveChart(props: CurveChartProps) {
+  const { depthCm, maxDepthCm, series, width, height, interfacesCm, bands, yInclude } = props;
+  const testId = props.testId;
+  const layout = useMemo(() => {
+    const l = curveChartLayout({
+      depthCm,
+      maxDepthCm,
+      series,
+      frame: { width, height, margin: { ...SIDE_MARGIN, top: 12, bottom: 40 } },
+      interfacesCm,
+      bands,
+      yInclude,
+    });
+    if (testId) noteChartLayout(testId, () => layoutSignature(l, width, height));
+    return l;
+  }, [testId, depthCm, maxDepthCm, series, width, height, interfacesCm, bands, yInclude]);
   const [hover, setHover] = useState<number | null>(null);
   const clipId = `clip-${useId().replace(/[^A-Za-z0-9_-]/g, '')}`;
   const { plot } = layout;
@@ -234,4 +246,4 @@ export function CurveChart(props: CurveChartProps) {
       ) : null}
     </figure>
   );
-}
+});
