@@ -13,28 +13,86 @@ import {
   type CorrectionResult,
   type TypeAMethod,
 } from './correctionTypes';
+import {
+  productOfFactors,
+  type BathoLayerTerm,
+  type CorrectionExplanation,
+  type ExplainFactor,
+} from './correctionExplanation';
 
-/** Product of the power-law factors; `depthFunction` is T(x) at the point's field. */
+/**
+ * Product of the power-law factors; `depthFunction` is T(x) at the point's field. `layers` are
+ * the per-layer terms (correctionExplanation.ts), `factors` the non-trivial ones in the order
+ * they were multiplied (their product is `product`).
+ */
 export function bathoPowerLawProduct(
   phantom: SlabPhantom,
   pointDepthCm: number,
   shiftCm: number,
   depthFunction: (xCm: number) => number,
-): { product: number; smallestDistanceCm: number } {
+): {
+  product: number;
+  smallestDistanceCm: number;
+  layers: BathoLayerTerm[];
+  factors: ExplainFactor[];
+} {
   const n = layerIndexAtDepth(phantom, pointDepthCm);
-  let product = 1;
   let previousRho = 1;
   let smallest = Infinity;
+  const layers: BathoLayerTerm[] = [];
+  const factors: ExplainFactor[] = [];
   for (let m = 0; m <= n; m++) {
     const layer = phantom.layers[m] as SlabLayer;
-    const exponent = layer.relativeElectronDensity - previousRho;
-    previousRho = layer.relativeElectronDensity;
-    if (exponent === 0) continue;
+    const rho = layer.relativeElectronDensity;
+    const exponent = rho - previousRho;
     const xCm = pointDepthCm - layer.topCm;
+    const term: BathoLayerTerm = {
+      layerIndex: m,
+      previousRho,
+      rho,
+      exponent,
+      distanceCm: xCm,
+      readAtCm: xCm + shiftCm,
+      depthFunction: null,
+      factor: 1,
+    };
+    layers.push(term);
+    previousRho = rho;
+    if (exponent === 0) continue;
     smallest = Math.min(smallest, xCm);
-    product *= Math.pow(depthFunction(xCm + shiftCm), exponent);
+    term.depthFunction = depthFunction(xCm + shiftCm);
+    term.factor = Math.pow(term.depthFunction, exponent);
+    factors.push({
+      symbol: `T(X_${m + 1}${shiftCm ? ' + z_bu' : ''})^(ρ_${m + 1} − ρ_${m})`,
+      label: `layer ${m + 1}`,
+      value: term.factor,
+    });
   }
-  return { product, smallestDistanceCm: smallest };
+  return { product: productOfFactors(factors), smallestDistanceCm: smallest, layers, factors };
+}
+
+/** The written-out terms of a Batho product (with T's name and the shift used). */
+export function bathoExplanation(
+  pointDepthCm: number,
+  sideAtDepthCm: number,
+  shiftCm: number,
+  table: 'TMR' | 'TAR',
+  p: ReturnType<typeof bathoPowerLawProduct>,
+): CorrectionExplanation {
+  return {
+    quantities: [
+      { symbol: 'd', label: 'depth of the point', value: pointDepthCm, unit: 'cm' },
+      { symbol: 's_d', label: 'field side at the depth', value: sideAtDepthCm, unit: 'cm' },
+      {
+        symbol: 'z_bu',
+        label: `shift of every distance (T = ${table})`,
+        value: shiftCm,
+        unit: 'cm',
+      },
+    ],
+    factors: p.factors,
+    bathoLayers: p.layers,
+  };
 }
 
 function depthFunctionOf(
@@ -56,12 +114,21 @@ export const bathoMethod: TypeAMethod = {
   correct(phantom, pointDepthCm, sideAtDepthCm, wd, options): CorrectionResult {
     const { recorder, flags } = collectingRecorder();
     const t = depthFunctionOf(wd, sideAtDepthCm, options.bathoTable ?? 'tmr', recorder);
-    const { product, smallestDistanceCm } = bathoPowerLawProduct(phantom, pointDepthCm, 0, t);
+    const table = options.bathoTable ?? 'tmr';
+    const terms = bathoPowerLawProduct(phantom, pointDepthCm, 0, t);
+    const { product, smallestDistanceCm } = terms;
     const out = flags();
     if (smallestDistanceCm < wd.dMaxCm)
       out.push(
         `unshifted Batho: ${smallestDistanceCm.toFixed(2)} cm from an interface < d_max (power law in the build-up region)`,
       );
-    return checkedCf(product, out);
+    const explanation = bathoExplanation(
+      pointDepthCm,
+      sideAtDepthCm,
+      0,
+      table === 'tar' ? 'TAR' : 'TMR',
+      terms,
+    );
+    return checkedCf(product, out, explanation);
   },
 };

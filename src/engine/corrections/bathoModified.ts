@@ -2,7 +2,7 @@
 // z_bu = d_max (El-Khatib & Battista 1984 for TMR; Thomas 1991 for the shift; TG-65 presentation;
 // from memory): CF = Π TMR(X_m + z_bu, s_d)^(ρ_m − ρ_{m−1}). Continuous across interfaces and
 // never reads the build-up part of the table.
-import { bathoPowerLawProduct } from './batho';
+import { bathoExplanation, bathoPowerLawProduct } from './batho';
 import { checkedCf, collectingRecorder, type TypeAMethod } from './correctionTypes';
 
 export const bathoModifiedMethod: TypeAMethod = {
@@ -11,9 +11,10 @@ export const bathoModifiedMethod: TypeAMethod = {
   variant: () => 'TMR, shift z_bu = d_max (10 × 10), μ₀ ≡ water, exponents by ρ_e',
   correct(phantom, pointDepthCm, sideAtDepthCm, wd) {
     const { recorder, flags } = collectingRecorder();
-    const { product } = bathoPowerLawProduct(phantom, pointDepthCm, wd.dMaxCm, (x) =>
+    const terms = bathoPowerLawProduct(phantom, pointDepthCm, wd.dMaxCm, (x) =>
       wd.tmr(x, sideAtDepthCm, recorder),
     );
-    return checkedCf(product, flags());
+    const explanation = bathoExplanation(pointDepthCm, sideAtDepthCm, wd.dMaxCm, 'TMR', terms);
+    return checkedCf(terms.product, flags(), explanation);
   },
 };

@@ -6,6 +6,7 @@ import { dosePerMuFactors } from '../check/dosePerMu';
 import type { MethodPoint, MethodResult } from '../methodResult';
 import type { SlabPhantom } from '../phantom/slabPhantom';
 import { collectingRecorder, type CorrectionOptions, type TypeAMethod } from './correctionTypes';
+import type { CorrectionExplanation } from './correctionExplanation';
 
 export interface TypeAGeometry {
   phantom: SlabPhantom;
@@ -18,10 +19,14 @@ export interface TypeAGeometry {
   points: readonly { id: string; depthCm: number }[];
 }
 
-interface Evaluation {
+export interface Evaluation {
   cf: number | null;
   dosePerMuCGy: number | null;
   flags: string[];
+  /** The terms the method multiplied into its CF (correctionExplanation.ts). */
+  explanation?: CorrectionExplanation | undefined;
+  /** Equivalent square of the field at the depth (cm): the s_d the method was given. */
+  sideAtDepthCm: number;
 }
 
 function evaluate(
@@ -36,7 +41,8 @@ function evaluate(
     fieldAtDepthCm(g.fieldYCm, g.ssdCm, depthCm),
   );
   const r = method.correct(g.phantom, depthCm, side, wd, options);
-  if (r.cf === null) return { cf: null, dosePerMuCGy: null, flags: r.flags };
+  const terms = { explanation: r.explanation, sideAtDepthCm: side };
+  if (r.cf === null) return { cf: null, dosePerMuCGy: null, flags: r.flags, ...terms };
   const { recorder, flags } = collectingRecorder();
   const factors = dosePerMuFactors({
     waterData: wd,
@@ -49,7 +55,26 @@ function evaluate(
   });
   const dose = Number.isFinite(factors.dosePerMuCGy) ? factors.dosePerMuCGy : null;
   const all = [...r.flags, ...flags().filter((f) => !r.flags.includes(f))];
-  return { cf: r.cf, dosePerMuCGy: dose, flags: all };
+  return { cf: r.cf, dosePerMuCGy: dose, flags: all, ...terms };
+}
+
+const withSsd = (options: CorrectionOptions, g: TypeAGeometry): CorrectionOptions => ({
+  ...options,
+  ssdCm: options.ssdCm ?? g.ssdCm,
+});
+
+/**
+ * One method at one depth exactly as its curve and points are computed (same options, field side
+ * and water data), with the terms it multiplied: the factor view reads this.
+ */
+export function typeAAtDepth(
+  method: TypeAMethod,
+  g: TypeAGeometry,
+  wd: WaterData,
+  depthCm: number,
+  options: CorrectionOptions = {},
+): Evaluation {
+  return evaluate(method, g, wd, depthCm, withSsd(options, g));
 }
 
 export function typeAMethodResult(
@@ -58,7 +83,7 @@ export function typeAMethodResult(
   wd: WaterData,
   options: CorrectionOptions = {},
 ): MethodResult {
-  const opts: CorrectionOptions = { ...options, ssdCm: options.ssdCm ?? g.ssdCm };
+  const opts = withSsd(options, g);
   const cf: (number | null)[] = [];
   const dose: (number | null)[] = [];
   for (const d of g.depthCm) {
