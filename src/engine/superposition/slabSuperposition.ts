@@ -10,6 +10,7 @@
 // uniform across the geometric field at each depth (sharp field edges, no penumbra model); the
 // polyenergetic kernel is not hardened with depth (TERMA is).
 import { quadrantSlabAtPositions, type QuadrantTable } from '../kernels/quadrant';
+import type { KernelComponent } from '../kernels/pointKernelTable';
 import { termaAlongRay } from '../kernels/terma';
 import type { Spectrum } from '../kernels/spectrum';
 import { FIELD_DEFINITION_DISTANCE_CM } from '../beam/geometry';
@@ -27,6 +28,10 @@ export interface SlabBeam {
 export interface SuperpositionOptions {
   /** Largest source-cell thickness (cm); cells never straddle an interface. Default 0.2. */
   cellStepCm?: number;
+  /** Kernel part to superpose (typeBDose.ts): total (default), primary or scatter. */
+  kernelComponent?: KernelComponent;
+  /** Only the TERMA released in this layer (index from the surface): dose by layer of origin. */
+  sourceLayerIndex?: number;
 }
 
 /** Half-widths of the field at a depth (cm). */
@@ -47,20 +52,24 @@ export interface SourceCells {
   radBottomCm: Float64Array;
   radCentreCm: Float64Array;
   density: Float64Array;
+  /** Index of the layer holding each cell. */
+  layerIndex: Int32Array;
 }
 
 export function sourceCells(phantom: SlabPhantom, stepCm: number): SourceCells {
   const tops: number[] = [];
   const bottoms: number[] = [];
   const dens: number[] = [];
-  for (const layer of phantom.layers) {
+  const layerOf: number[] = [];
+  phantom.layers.forEach((layer, j) => {
     const n = Math.max(1, Math.ceil(layer.thicknessCm / stepCm - 1e-9));
     for (let i = 0; i < n; i++) {
       tops.push(layer.topCm + (layer.thicknessCm * i) / n);
       bottoms.push(layer.topCm + (layer.thicknessCm * (i + 1)) / n);
       dens.push(layer.relativeElectronDensity);
+      layerOf.push(j);
     }
-  }
+  });
   const count = tops.length;
   const topCm = Float64Array.from(tops);
   const bottomCm = Float64Array.from(bottoms);
@@ -75,6 +84,7 @@ export function sourceCells(phantom: SlabPhantom, stepCm: number): SourceCells {
     radBottomCm: rad(bottomCm),
     radCentreCm: rad(centreCm),
     density: Float64Array.from(dens),
+    layerIndex: Int32Array.from(layerOf),
   };
 }
 
@@ -93,6 +103,7 @@ export function superpositionDose(
   options: SuperpositionOptions = {},
 ): Float64Array {
   const cells = sourceCells(phantom, options.cellStepCm ?? 0.2);
+  const onlyLayer = options.sourceLayerIndex;
   const terma = termaAlongRay(phantom, spectrum, cells.centreCm, { ssdCm: beam.ssdCm });
   const halfX = new Float64Array(cells.count);
   const halfY = new Float64Array(cells.count);
@@ -124,6 +135,7 @@ export function superpositionDose(
     for (let b = 0; b <= cells.count; b++)
       zetaPosition[b] = kernel.zeta.position(dz - (boundaries[b] as number));
     for (let c = 0; c < cells.count; c++) {
+      if (onlyLayer !== undefined && cells.layerIndex[c] !== onlyLayer) continue;
       const zetaHi = dz - (boundaries[c] as number);
       const zetaLo = dz - (boundaries[c + 1] as number);
       if (zetaLo >= extent || zetaHi <= -extent) continue;

@@ -30,7 +30,7 @@ export function typeBRawDose(
   if (engine === 'pencil-beam')
     return pencilBeamDose(model.pencil, phantom, beam, depthsCm, lateralCm);
   return superpositionDose(
-    model.quadrant('total'),
+    model.quadrant(options.kernelComponent ?? 'total'),
     model.spectrum,
     phantom,
     beam,
