@@ -21,7 +21,7 @@ export type Theme = 'auto' | 'light' | 'dark';
  * explicitly ('modelled'). Opening another case goes back to 'case'.
  */
 export type WaterSource = 'case' | 'modelled';
-export type ViewTab = 'dose' | 'cf' | 'water' | 'plane' | 'mc' | 'check';
+export type ViewTab = 'dose' | 'cf' | 'water' | 'plane' | 'mc' | 'check' | 'explain';
 
 export interface FieldDraft {
   text: string;

@@ -8,6 +8,7 @@ const modules = import.meta.glob<PanelModule>([
   './check/CheckPanel.tsx',
   './plane/DosePlanePanel.tsx',
   './montecarlo/MonteCarloPanel.tsx',
+  './explain/ExplainPanel.tsx',
 ]);
 
 function lazyPanel(path: string, exportName: string): ComponentType | null {
@@ -24,6 +25,7 @@ const PANELS = {
   check: lazyPanel('./check/CheckPanel.tsx', 'CheckPanel'),
   plane: lazyPanel('./plane/DosePlanePanel.tsx', 'DosePlanePanel'),
   mc: lazyPanel('./montecarlo/MonteCarloPanel.tsx', 'MonteCarloPanel'),
+  explain: lazyPanel('./explain/ExplainPanel.tsx', 'ExplainPanel'),
 } as const;
 
 export function MountPoint({
