@@ -10,6 +10,7 @@ import type { WaterChoice } from '../../compute/waterSource';
 import type { DoseQuantity } from '../../engine/dose/doseQuantity';
 import { sweepCsv } from '../../io/sweepCsv';
 import { downloadText } from '../download';
+import { num } from './formatNumber';
 import { SweepChart } from './SweepChart';
 
 const VARIABLES: { id: SweepVariable; label: string }[] = [
@@ -112,6 +113,7 @@ export function SweepSection(props: {
     );
   const running = status.kind === 'running';
   const noEnergy = variable !== 'energy' && energies.length === 0;
+  const noPoint = depthCm === null && variable !== 'depth';
   return (
     <section className="sweep" aria-labelledby="sweep-heading">
       <h3 id="sweep-heading">Sweep: CF at the point as one input varies</h3>
@@ -146,7 +148,8 @@ export function SweepSection(props: {
             >
               {layers.map((l) => (
                 <option key={l.index} value={l.index}>
-                  {l.index + 1}: {l.material.replace(/ \(.*\)$/, '')}, {l.topCm}–{l.bottomCm} cm
+                  {l.index + 1}: {l.material.replace(/ \(.*\)$/, '')}, {num(l.topCm, 4)}–
+                  {num(l.bottomCm, 4)} cm
                 </option>
               ))}
             </select>
@@ -187,7 +190,7 @@ export function SweepSection(props: {
           </>
         ) : null}
         <div className="sweep-actions">
-          <button type="submit" disabled={running || noEnergy} data-testid="sweep-run">
+          <button type="submit" disabled={running || noEnergy || noPoint} data-testid="sweep-run">
             Run sweep
           </button>
           {running ? (
@@ -224,7 +227,9 @@ export function SweepSection(props: {
                 ? 'Cancelled.'
                 : noEnergy
                   ? 'Choose at least one energy.'
-                  : ''}
+                  : noPoint
+                    ? 'Enter a valid depth above first.'
+                    : ''}
           </span>
         </div>
       </form>
