@@ -17,7 +17,7 @@ const variants = fc.constantFrom(
 );
 
 describe('written-out factors', () => {
-  it('every method: Π factors = CF to 1e-9 in random slab stacks', () => {
+  it('every method: Π factors = CF to 1e-9 in random slab stacks, and the CF is the same without the terms', () => {
     fc.assert(
       fc.property(
         fc.array(
@@ -34,8 +34,10 @@ describe('written-out factors', () => {
           const p = slabs(spec);
           const d = u * p.totalThicknessCm;
           for (const m of TYPE_A_METHODS) {
-            const r = m.correct(p, d, s, wd, options);
+            const r = m.correct(p, d, s, wd, { ...options, explain: true });
             expect(r.explanation, m.id).toBeDefined();
+            // The curves' call (no terms asked for) returns the very same CF.
+            expect(m.correct(p, d, s, wd, options).cf, m.id).toBe(r.cf);
             if (r.cf === null) continue;
             const product = productOfFactors(r.explanation?.factors ?? []);
             expect(Math.abs(product - r.cf) / r.cf, m.id).toBeLessThanOrEqual(1e-9);
@@ -56,7 +58,7 @@ describe('written-out factors', () => {
           const p = slabs(thicknesses.map((t) => [1, t] as const));
           const d = u * p.totalThicknessCm;
           for (const m of TYPE_A_METHODS) {
-            const r = m.correct(p, d, s, wd, { ssdCm: 100 });
+            const r = m.correct(p, d, s, wd, { ssdCm: 100, explain: true });
             for (const f of r.explanation?.factors ?? [])
               expect(Math.abs(f.value - 1), `${m.id}: ${f.symbol}`).toBeLessThanOrEqual(1e-12);
             for (const l of r.explanation?.bathoLayers ?? []) {

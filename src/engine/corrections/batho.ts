@@ -14,61 +14,79 @@ import {
   type TypeAMethod,
 } from './correctionTypes';
 import {
-  productOfFactors,
   type BathoLayerTerm,
   type CorrectionExplanation,
   type ExplainFactor,
 } from './correctionExplanation';
 
+/** Symbol and label of layer m's factor, built once per layer (the curves call this per depth). */
+const factorNames: { symbol: string; label: string }[][] = [[], []];
+function layerFactorNames(m: number, shifted: boolean): { symbol: string; label: string } {
+  const list = factorNames[shifted ? 1 : 0] as { symbol: string; label: string }[];
+  let names = list[m];
+  if (!names) {
+    names = {
+      symbol: `T(X_${m + 1}${shifted ? ' + z_bu' : ''})^(ρ_${m + 1} − ρ_${m})`,
+      label: `layer ${m + 1}`,
+    };
+    list[m] = names;
+  }
+  return names;
+}
+
+/** The per-layer terms of a Batho product, filled when an explanation is asked for. */
+export interface BathoTerms {
+  layers: BathoLayerTerm[];
+  /** The non-trivial factors, in the order they were multiplied. */
+  factors: ExplainFactor[];
+}
+
 /**
- * Product of the power-law factors; `depthFunction` is T(x) at the point's field. `layers` are
- * the per-layer terms (correctionExplanation.ts), `factors` the non-trivial ones in the order
- * they were multiplied (their product is `product`).
+ * Product of the power-law factors; `depthFunction` is T(x) at the point's field. With `terms`
+ * the loop also records each layer's terms and each factor it multiplied (same values, same
+ * order, so their product is `product`).
  */
 export function bathoPowerLawProduct(
   phantom: SlabPhantom,
   pointDepthCm: number,
   shiftCm: number,
   depthFunction: (xCm: number) => number,
-): {
-  product: number;
-  smallestDistanceCm: number;
-  layers: BathoLayerTerm[];
-  factors: ExplainFactor[];
-} {
+  terms?: BathoTerms,
+): { product: number; smallestDistanceCm: number } {
   const n = layerIndexAtDepth(phantom, pointDepthCm);
+  let product = 1;
   let previousRho = 1;
   let smallest = Infinity;
-  const layers: BathoLayerTerm[] = [];
-  const factors: ExplainFactor[] = [];
   for (let m = 0; m <= n; m++) {
     const layer = phantom.layers[m] as SlabLayer;
-    const rho = layer.relativeElectronDensity;
-    const exponent = rho - previousRho;
+    const exponent = layer.relativeElectronDensity - previousRho;
     const xCm = pointDepthCm - layer.topCm;
-    const term: BathoLayerTerm = {
-      layerIndex: m,
-      previousRho,
-      rho,
-      exponent,
-      distanceCm: xCm,
-      readAtCm: xCm + shiftCm,
-      depthFunction: null,
-      factor: 1,
-    };
-    layers.push(term);
-    previousRho = rho;
+    const term: BathoLayerTerm | null = terms
+      ? {
+          layerIndex: m,
+          previousRho,
+          rho: layer.relativeElectronDensity,
+          exponent,
+          distanceCm: xCm,
+          readAtCm: xCm + shiftCm,
+          depthFunction: null,
+          factor: 1,
+        }
+      : null;
+    if (term) terms?.layers.push(term);
+    previousRho = layer.relativeElectronDensity;
     if (exponent === 0) continue;
     smallest = Math.min(smallest, xCm);
-    term.depthFunction = depthFunction(xCm + shiftCm);
-    term.factor = Math.pow(term.depthFunction, exponent);
-    factors.push({
-      symbol: `T(X_${m + 1}${shiftCm ? ' + z_bu' : ''})^(ρ_${m + 1} − ρ_${m})`,
-      label: `layer ${m + 1}`,
-      value: term.factor,
-    });
+    const t = depthFunction(xCm + shiftCm);
+    const factor = Math.pow(t, exponent);
+    product *= factor;
+    if (term) {
+      term.depthFunction = t;
+      term.factor = factor;
+      terms?.factors.push({ ...layerFactorNames(m, shiftCm !== 0), value: factor });
+    }
   }
-  return { product: productOfFactors(factors), smallestDistanceCm: smallest, layers, factors };
+  return { product, smallestDistanceCm: smallest };
 }
 
 /** The written-out terms of a Batho product (with T's name and the shift used). */
@@ -77,7 +95,7 @@ export function bathoExplanation(
   sideAtDepthCm: number,
   shiftCm: number,
   table: 'TMR' | 'TAR',
-  p: ReturnType<typeof bathoPowerLawProduct>,
+  p: BathoTerms,
 ): CorrectionExplanation {
   return {
     quantities: [
@@ -115,13 +133,20 @@ export const bathoMethod: TypeAMethod = {
     const { recorder, flags } = collectingRecorder();
     const t = depthFunctionOf(wd, sideAtDepthCm, options.bathoTable ?? 'tmr', recorder);
     const table = options.bathoTable ?? 'tmr';
-    const terms = bathoPowerLawProduct(phantom, pointDepthCm, 0, t);
-    const { product, smallestDistanceCm } = terms;
+    const terms: BathoTerms | undefined = options.explain ? { layers: [], factors: [] } : undefined;
+    const { product, smallestDistanceCm } = bathoPowerLawProduct(
+      phantom,
+      pointDepthCm,
+      0,
+      t,
+      terms,
+    );
     const out = flags();
     if (smallestDistanceCm < wd.dMaxCm)
       out.push(
         `unshifted Batho: ${smallestDistanceCm.toFixed(2)} cm from an interface < d_max (power law in the build-up region)`,
       );
+    if (!terms) return checkedCf(product, out);
     const explanation = bathoExplanation(
       pointDepthCm,
       sideAtDepthCm,

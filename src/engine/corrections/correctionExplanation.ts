@@ -1,8 +1,8 @@
-// The intermediate terms of a type-A correction, written out by the method that computes the CF:
-// the quantities it read (depths, densities, table values) and the factors whose product IS the
-// CF it returns (each method multiplies exactly these factors, in this order, through
-// productOfFactors). The page's factor view and the explain tests read them; nothing re-derives
-// a formula from them.
+// The intermediate terms of a type-A correction, written out by the method that computes the CF
+// when asked (CorrectionOptions.explain): the quantities it read (depths, densities, table values)
+// and the factors it multiplied, the same numbers in the same order, so productOfFactors of them
+// is the CF the method returns (tests check it). The page's factor view reads them; nothing
+// re-derives a formula from them.
 
 /** A number the method read or computed on the way (not a factor of the product). */
 export interface ExplainQuantity {

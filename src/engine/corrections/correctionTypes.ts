@@ -23,6 +23,11 @@ export interface CorrectionOptions {
   etarWeights?: ScatterWeightFunction | undefined;
   /** What the supplied ETAR weights are, for the variant text (e.g. "scatter part of the water kernel"). */
   etarWeightsSource?: string | undefined;
+  /**
+   * Also return the terms the CF was multiplied from (correctionExplanation.ts): the factor view.
+   * The CF is the same either way; the curves leave it off (no per-depth allocations).
+   */
+  explain?: boolean | undefined;
   /** ETAR default weighting: scatter attenuation length λ (cm); 1/μ_eff of the water data when absent. */
   etarScatterLengthCm?: number | undefined;
 }

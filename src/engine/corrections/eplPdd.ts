@@ -4,7 +4,7 @@
 import { pddOf } from '../beam/waterDataFunctions';
 import { radiologicalDepthCm } from '../phantom/slabPhantom';
 import { checkedCf, collectingRecorder, type TypeAMethod } from './correctionTypes';
-import { productOfFactors, type CorrectionExplanation } from './correctionExplanation';
+import type { CorrectionExplanation } from './correctionExplanation';
 
 /** The inverse-square factor ((f + d′)/(f + d))² of EPL with PDD data. */
 export function eplInverseSquareFactor(
@@ -30,7 +30,8 @@ export const eplPddMethod: TypeAMethod = {
     const pddEff = pddOf(wd, dEff, surfaceSideCm, f, recorder);
     const pddD = pddOf(wd, pointDepthCm, surfaceSideCm, f, recorder);
     const inverseSquare = eplInverseSquareFactor(f, pointDepthCm, dEff);
-    const explanation: CorrectionExplanation = {
+    const pddRatio = pddEff / pddD;
+    const explain = (): CorrectionExplanation => ({
       quantities: [
         { symbol: 'd', label: 'depth of the point', value: pointDepthCm, unit: 'cm' },
         { symbol: 'd′', label: 'radiological depth', value: dEff, unit: 'cm' },
@@ -45,13 +46,13 @@ export const eplPddMethod: TypeAMethod = {
         { symbol: 'PDD(d, s, f)', label: 'PDD at the depth', value: pddD, unit: '%' },
       ],
       factors: [
-        { symbol: 'PDD(d′, s, f)/PDD(d, s, f)', label: 'ratio of PDD', value: pddEff / pddD },
+        { symbol: 'PDD(d′, s, f)/PDD(d, s, f)', label: 'ratio of PDD', value: pddRatio },
         { symbol: '((f+d′)/(f+d))²', label: 'inverse-square term', value: inverseSquare },
       ],
-    };
+    });
     const out = flags();
     if (Math.min(dEff, pointDepthCm) < wd.dMaxCm)
       out.push('build-up: PDD read at a depth below d_max');
-    return checkedCf(productOfFactors(explanation.factors), out, explanation);
+    return checkedCf(pddRatio * inverseSquare, out, options.explain ? explain() : undefined);
   },
 };

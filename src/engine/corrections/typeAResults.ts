@@ -74,7 +74,7 @@ export function typeAAtDepth(
   depthCm: number,
   options: CorrectionOptions = {},
 ): Evaluation {
-  return evaluate(method, g, wd, depthCm, withSsd(options, g));
+  return evaluate(method, g, wd, depthCm, { ...withSsd(options, g), explain: true });
 }
 
 export function typeAMethodResult(

@@ -22,7 +22,7 @@ const quantity = (r: ReturnType<typeof rtmrMethod.correct>, symbol: string) =>
 
 describe('Batho written out per layer', () => {
   it('bathoMethod.correct(L, 20 cm) lists T(15)^−0.75 for the lung and T(5)^+0.75 for the water below, product 1.2949', () => {
-    const r = bathoMethod.correct(PHANTOM_L(), 20, S, wd, {});
+    const r = bathoMethod.correct(PHANTOM_L(), 20, S, wd, { explain: true });
     const layers = r.explanation?.bathoLayers ?? [];
     expect(layers.map((l) => l.exponent)).toEqual([0, -0.75, 0.75]);
     expect(layers.map((l) => l.distanceCm)).toEqual([20, 15, 5]);
@@ -44,7 +44,7 @@ describe('Batho written out per layer', () => {
   });
 
   it('bathoModifiedMethod.correct(L, 20 cm) reads every TMR d_max deeper: T(16.5)^−0.75 · T(6.5)^0.75 = 1.3102', () => {
-    const r = bathoModifiedMethod.correct(PHANTOM_L(), 20, S, wd, {});
+    const r = bathoModifiedMethod.correct(PHANTOM_L(), 20, S, wd, { explain: true });
     const layers = r.explanation?.bathoLayers ?? [];
     expect(layers.map((l) => l.readAtCm)).toEqual([21.5, 16.5, 6.5]);
     // Modified Batho L1 = 1.3102 (physics notes §5.2, derived)
@@ -53,7 +53,7 @@ describe('Batho written out per layer', () => {
   });
 
   it('bathoMethod.correct(G4, 16 cm) has one factor per density step: bone in, bone→lung, lung→water', () => {
-    const r = bathoMethod.correct(PHANTOM_G4(), 16, S, wd, {});
+    const r = bathoMethod.correct(PHANTOM_G4(), 16, S, wd, { explain: true });
     const layers = r.explanation?.bathoLayers ?? [];
     expect(layers.map((l) => l.exponent)).toEqual([0, 0.8, 0.25 - 1.8, 0.75]);
     expect(r.explanation?.factors).toHaveLength(3);
@@ -65,7 +65,7 @@ describe('Batho written out per layer', () => {
 
 describe('effective-depth methods written out', () => {
   it('rtmrMethod.correct(L, 20 cm): d′ = 5 + 10·0.25 + 5 = 12.5 cm, TMR(12.5)/TMR(20) = 1.3477', () => {
-    const r = rtmrMethod.correct(PHANTOM_L(), 20, S, wd, {});
+    const r = rtmrMethod.correct(PHANTOM_L(), 20, S, wd, { explain: true });
     expect(quantity(r, 'd′')).toBeCloseTo(12.5, 12);
     // derived: fixture TMR(12.5, 10) = 0.71675 (physics notes §5.2)
     expectRelClose(quantity(r, 'TMR(d′, s_d)') as number, 0.71675, 1e-4);
@@ -77,7 +77,7 @@ describe('effective-depth methods written out', () => {
   });
 
   it('eplPddMethod.correct(L, 20 cm, f = 100) writes the inverse-square term ((100+12.5)/(100+20))² = 0.87891', () => {
-    const r = eplPddMethod.correct(PHANTOM_L(), 20, S, wd, { ssdCm: 100 });
+    const r = eplPddMethod.correct(PHANTOM_L(), 20, S, wd, { ssdCm: 100, explain: true });
     const isq = r.explanation?.factors.find((f) => f.symbol === '((f+d′)/(f+d))²');
     // EPL-with-PDD inverse-square factor for L1 (physics notes §5.2, derived)
     expectRelClose(isq?.value as number, 0.87891, 1e-5);
@@ -86,7 +86,7 @@ describe('effective-depth methods written out', () => {
   });
 
   it('etarMethod.correct(L, 20 cm, ρ̃ = 0.6) writes the TMR and PSF ratios, product 1.2843, s̃ = 6 cm', () => {
-    const r = etarMethod.correct(PHANTOM_L(), 20, S, wd, { etarRhoTilde: 0.6 });
+    const r = etarMethod.correct(PHANTOM_L(), 20, S, wd, { etarRhoTilde: 0.6, explain: true });
     expect(quantity(r, 'ρ̃')).toBe(0.6);
     expect(quantity(r, 's̃ = ρ̃·s_d')).toBeCloseTo(6, 12);
     // r̃ = ρ̃·s/√π for the disc of equal area: 6/√π = 3.38514 (derived)
@@ -100,7 +100,7 @@ describe('effective-depth methods written out', () => {
   });
 
   it('etarMethod.correct with the default weighting lists one scatter weight per layer', () => {
-    const r = etarMethod.correct(PHANTOM_L(), 20, S, wd, {});
+    const r = etarMethod.correct(PHANTOM_L(), 20, S, wd, { explain: true });
     const weights = r.explanation?.quantities.filter((q) => q.symbol.startsWith('W_')) ?? [];
     expect(weights).toHaveLength(3);
     for (const w of weights) expect(w.value).toBeGreaterThanOrEqual(0);
@@ -108,7 +108,7 @@ describe('effective-depth methods written out', () => {
   });
 
   it('waterMethod.correct has no factors: the empty product, 1', () => {
-    const r = waterMethod.correct(PHANTOM_L(), 20, S, wd, {});
+    const r = waterMethod.correct(PHANTOM_L(), 20, S, wd, { explain: true });
     expect(r.explanation?.factors).toEqual([]);
     expect(r.cf).toBe(1);
   });
@@ -116,7 +116,7 @@ describe('effective-depth methods written out', () => {
   it('every type-A method writes out a product that is its CF, at depths across phantom L', () => {
     for (const m of TYPE_A_METHODS)
       for (const d of [0.5, 3, 5, 5.5, 10, 15, 15.2, 22, 30]) {
-        const r = m.correct(PHANTOM_L(), d, S, wd, { ssdCm: 100 });
+        const r = m.correct(PHANTOM_L(), d, S, wd, { ssdCm: 100, explain: true });
         if (r.cf === null) continue;
         expect(productOfFactors(r.explanation?.factors ?? []), `${m.id} at ${d} cm`).toBe(r.cf);
       }
