@@ -32,7 +32,6 @@ ${MC_USAGE}
 ${DICOM_USAGE}`;
 
 function main(argv: string[]): number {
-  loadGeneratedDataFromDisk();
   let args;
   try {
     args = parseArgs(argv);
@@ -87,6 +86,8 @@ function main(argv: string[]): number {
   return 0;
 }
 
+// The engine's generated data (kernels, modelled beams) is read once, before either command.
+loadGeneratedDataFromDisk();
 if (process.argv.some((a) => a === '--dicom' || a.startsWith('--dicom=')))
   void runDicomCommand(process.argv.slice(2), USAGE).then((code) => (process.exitCode = code));
 else process.exitCode = main(process.argv.slice(2));

@@ -19,6 +19,8 @@ import {
 } from './calculationService';
 import { measuredTableOf } from './waterSource';
 import { resolveDoseTo } from './doseConvention';
+import { explainPointRequest } from './explainPoint';
+import { cfSweepRequest } from './cfSweep';
 
 export interface RadiologicalCurve {
   depthCm: number[];
@@ -32,6 +34,10 @@ export const computeApi = {
   calculatePlan: calculatePlanRequest,
   /** Calibration, options and key of a Monte Carlo run of a case (purpose 'monte-carlo'). */
   prepareMonteCarlo,
+  /** Every method's written-out factors at one depth of a case (the factor view). */
+  explainPoint: explainPointRequest,
+  /** CF at a point against density, field, energy or depth, every deterministic method. */
+  cfSweep: cfSweepRequest,
   /** Radiological depth against geometric depth through a layer stack. */
   radiologicalDepthCurve(layers: LayerSpec[], stepCm = 0.05): RadiologicalCurve {
     const phantom = makeSlabPhantom(layers);

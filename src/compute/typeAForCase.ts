@@ -11,7 +11,7 @@ import { resolveWater } from './waterSource';
 import { etarScatterWeights } from '../engine/kernels/scatterWeights';
 import { knotInterpolatedWeights } from './etarKnotWeights';
 import { TYPE_A_METHOD_IDS, TYPE_A_METHODS } from '../engine/corrections/typeAMethods';
-import { typeAMethodResults } from '../engine/corrections/typeAResults';
+import { typeAMethodResults, type TypeAGeometry } from '../engine/corrections/typeAResults';
 import type { MethodResult } from '../engine/methodResult';
 import type { SlabPhantom } from '../engine/phantom/slabPhantom';
 import type { LaminaCase } from '../io/caseSchema';
@@ -58,18 +58,11 @@ export function waterDataForCase(c: LaminaCase, given?: WaterData): WaterData | 
   return r.ok ? r.waterData : undefined;
 }
 
-/**
- * Type-A results for a case on the report's depth grid. `requested` = method ids asked for
- * (undefined: all type-A methods).
- */
-export function typeAForCase(
+/** The correction options of a case's type-A methods (ETAR's default kernel weights filled in). */
+export function typeAOptionsForCase(
   c: LaminaCase,
-  phantom: SlabPhantom,
-  depthCm: readonly number[],
-  requested: readonly string[] | undefined,
-  givenWaterData?: WaterData,
   variants: TypeAVariants = {},
-): TypeAOutcome {
+): CorrectionOptions {
   const { etarKnotStepCm, ...options } = variants;
   if (options.etarRhoTilde === undefined && !options.etarWeights) {
     options.etarWeights = kernelEtarWeights(c);
@@ -83,22 +76,47 @@ export function typeAForCase(
       options.etarWeightsSource += `, exact every ≤ ${etarKnotStepCm} cm and interpolated (preview)`;
     }
   }
+  return options;
+}
+
+/**
+ * Type-A results for a case on the report's depth grid. `requested` = method ids asked for
+ * (undefined: all type-A methods).
+ */
+export function typeAForCase(
+  c: LaminaCase,
+  phantom: SlabPhantom,
+  depthCm: readonly number[],
+  requested: readonly string[] | undefined,
+  givenWaterData?: WaterData,
+  variants: TypeAVariants = {},
+): TypeAOutcome {
+  const options = typeAOptionsForCase(c, variants);
   const ids = requested ? requested.filter(isTypeAMethodId) : TYPE_A_METHOD_IDS;
   const waterData = waterDataForCase(c, givenWaterData);
   if (!waterData)
     return { methods: [], unavailable: ids.map((id) => ({ id, reason: NEEDS_WATER_DATA })) };
   const methods = TYPE_A_METHODS.filter((m) => ids.includes(m.id));
-  const geometry = {
+  const geometry = typeAGeometryOfCase(c, phantom, depthCm);
+  return {
+    methods: typeAMethodResults(methods, geometry, waterData, options),
+    unavailable: [],
+    waterData,
+  };
+}
+
+/** The geometry the type-A methods of a case read: set-up, field and the case's points. */
+export function typeAGeometryOfCase(
+  c: LaminaCase,
+  phantom: SlabPhantom,
+  depthCm: readonly number[],
+): TypeAGeometry {
+  return {
     phantom,
     ssdCm: ssdCmOf(c.beam.setup),
     fieldXCm: c.beam.fieldXCm,
     fieldYCm: c.beam.fieldYCm,
     depthCm,
     points: c.points,
-  };
-  return {
-    methods: typeAMethodResults(methods, geometry, waterData, options),
-    unavailable: [],
-    waterData,
   };
 }

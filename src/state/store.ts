@@ -21,7 +21,7 @@ export type Theme = 'auto' | 'light' | 'dark';
  * explicitly ('modelled'). Opening another case goes back to 'case'.
  */
 export type WaterSource = 'case' | 'modelled';
-export type ViewTab = 'dose' | 'cf' | 'water' | 'plane' | 'mc' | 'check' | 'dicom';
+export type ViewTab = 'dose' | 'cf' | 'water' | 'plane' | 'mc' | 'check' | 'dicom' | 'explain';
 
 export interface FieldDraft {
   text: string;

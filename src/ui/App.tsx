@@ -28,6 +28,7 @@ const TABS: { id: ViewTab; label: string }[] = [
   { id: 'mc', label: 'Monte Carlo run' },
   { id: 'check', label: 'Point check & report' },
   { id: 'dicom', label: 'Patient import (DICOM)' },
+  { id: 'explain', label: 'Factors & sweeps' },
 ];
 
 function ThemeToggle() {
@@ -194,6 +195,13 @@ function Workbench() {
             which="mc"
             title="Monte Carlo run"
             pending="Monte Carlo run controls (histories, seed, progress, stop) appear here once the Monte Carlo engine is in."
+          />
+        ) : null}
+        {tab === 'explain' ? (
+          <MountPoint
+            which="explain"
+            title="Factors & sweeps"
+            pending="Each method's factors at a point and sweeps of the CF appear here."
           />
         ) : null}
         {tab === 'check' ? (

@@ -9,6 +9,7 @@ const modules = import.meta.glob<PanelModule>([
   './plane/DosePlanePanel.tsx',
   './montecarlo/MonteCarloPanel.tsx',
   './dicom/DicomImportPanel.tsx',
+  './explain/ExplainPanel.tsx',
 ]);
 
 function lazyPanel(path: string, exportName: string): ComponentType | null {
@@ -26,6 +27,7 @@ const PANELS = {
   plane: lazyPanel('./plane/DosePlanePanel.tsx', 'DosePlanePanel'),
   mc: lazyPanel('./montecarlo/MonteCarloPanel.tsx', 'MonteCarloPanel'),
   dicom: lazyPanel('./dicom/DicomImportPanel.tsx', 'DicomImportPanel'),
+  explain: lazyPanel('./explain/ExplainPanel.tsx', 'ExplainPanel'),
 } as const;
 
 export function MountPoint({

@@ -13,13 +13,45 @@ import {
   type CorrectionResult,
   type TypeAMethod,
 } from './correctionTypes';
+import {
+  type BathoLayerTerm,
+  type CorrectionExplanation,
+  type ExplainFactor,
+} from './correctionExplanation';
 
-/** Product of the power-law factors; `depthFunction` is T(x) at the point's field. */
+/** Symbol and label of layer m's factor, built once per layer (the curves call this per depth). */
+const factorNames: { symbol: string; label: string }[][] = [[], []];
+function layerFactorNames(m: number, shifted: boolean): { symbol: string; label: string } {
+  const list = factorNames[shifted ? 1 : 0] as { symbol: string; label: string }[];
+  let names = list[m];
+  if (!names) {
+    names = {
+      symbol: `T(X_${m + 1}${shifted ? ' + z_bu' : ''})^(ρ_${m + 1} − ρ_${m})`,
+      label: `layer ${m + 1}`,
+    };
+    list[m] = names;
+  }
+  return names;
+}
+
+/** The per-layer terms of a Batho product, filled when an explanation is asked for. */
+export interface BathoTerms {
+  layers: BathoLayerTerm[];
+  /** The non-trivial factors, in the order they were multiplied. */
+  factors: ExplainFactor[];
+}
+
+/**
+ * Product of the power-law factors; `depthFunction` is T(x) at the point's field. With `terms`
+ * the loop also records each layer's terms and each factor it multiplied (same values, same
+ * order, so their product is `product`).
+ */
 export function bathoPowerLawProduct(
   phantom: SlabPhantom,
   pointDepthCm: number,
   shiftCm: number,
   depthFunction: (xCm: number) => number,
+  terms?: BathoTerms,
 ): { product: number; smallestDistanceCm: number } {
   const n = layerIndexAtDepth(phantom, pointDepthCm);
   let product = 1;
@@ -28,13 +60,57 @@ export function bathoPowerLawProduct(
   for (let m = 0; m <= n; m++) {
     const layer = phantom.layers[m] as SlabLayer;
     const exponent = layer.relativeElectronDensity - previousRho;
+    const xCm = pointDepthCm - layer.topCm;
+    const term: BathoLayerTerm | null = terms
+      ? {
+          layerIndex: m,
+          previousRho,
+          rho: layer.relativeElectronDensity,
+          exponent,
+          distanceCm: xCm,
+          readAtCm: xCm + shiftCm,
+          depthFunction: null,
+          factor: 1,
+        }
+      : null;
+    if (term) terms?.layers.push(term);
     previousRho = layer.relativeElectronDensity;
     if (exponent === 0) continue;
-    const xCm = pointDepthCm - layer.topCm;
     smallest = Math.min(smallest, xCm);
-    product *= Math.pow(depthFunction(xCm + shiftCm), exponent);
+    const t = depthFunction(xCm + shiftCm);
+    const factor = Math.pow(t, exponent);
+    product *= factor;
+    if (term) {
+      term.depthFunction = t;
+      term.factor = factor;
+      terms?.factors.push({ ...layerFactorNames(m, shiftCm !== 0), value: factor });
+    }
   }
   return { product, smallestDistanceCm: smallest };
+}
+
+/** The written-out terms of a Batho product (with T's name and the shift used). */
+export function bathoExplanation(
+  pointDepthCm: number,
+  sideAtDepthCm: number,
+  shiftCm: number,
+  table: 'TMR' | 'TAR',
+  p: BathoTerms,
+): CorrectionExplanation {
+  return {
+    quantities: [
+      { symbol: 'd', label: 'depth of the point', value: pointDepthCm, unit: 'cm' },
+      { symbol: 's_d', label: 'field side at the depth', value: sideAtDepthCm, unit: 'cm' },
+      {
+        symbol: 'z_bu',
+        label: `shift of every distance (T = ${table})`,
+        value: shiftCm,
+        unit: 'cm',
+      },
+    ],
+    factors: p.factors,
+    bathoLayers: p.layers,
+  };
 }
 
 function depthFunctionOf(
@@ -97,12 +173,28 @@ export const bathoMethod: TypeAMethod = {
       };
     const { recorder, flags } = collectingRecorder();
     const t = depthFunctionOf(wd, sideAtDepthCm, options.bathoTable ?? 'tmr', recorder);
-    const { product, smallestDistanceCm } = bathoPowerLawProduct(phantom, pointDepthCm, 0, t);
+    const table = options.bathoTable ?? 'tmr';
+    const terms: BathoTerms | undefined = options.explain ? { layers: [], factors: [] } : undefined;
+    const { product, smallestDistanceCm } = bathoPowerLawProduct(
+      phantom,
+      pointDepthCm,
+      0,
+      t,
+      terms,
+    );
     const out = flags();
     if (smallestDistanceCm < wd.dMaxCm)
       out.push(
         `unshifted Batho: ${smallestDistanceCm.toFixed(2)} cm from an interface < d_max (power law in the build-up region)`,
       );
-    return checkedCf(product, out);
+    if (!terms) return checkedCf(product, out);
+    const explanation = bathoExplanation(
+      pointDepthCm,
+      sideAtDepthCm,
+      0,
+      table === 'tar' ? 'TAR' : 'TMR',
+      terms,
+    );
+    return checkedCf(product, out, explanation);
   },
 };

@@ -3,6 +3,7 @@
 import type { MethodId } from '../methodRegistry';
 import type { ExtrapolationFlag, LookupRecorder, WaterData } from '../beam/waterData';
 import type { SlabPhantom } from '../phantom/slabPhantom';
+import type { CorrectionExplanation } from './correctionExplanation';
 
 /** Relative scatter weight of each layer for a point (ETAR's ρ̃); one entry per layer. */
 export type ScatterWeightFunction = (
@@ -22,6 +23,11 @@ export interface CorrectionOptions {
   etarWeights?: ScatterWeightFunction | undefined;
   /** What the supplied ETAR weights are, for the variant text (e.g. "scatter part of the water kernel"). */
   etarWeightsSource?: string | undefined;
+  /**
+   * Also return the terms the CF was multiplied from (correctionExplanation.ts): the factor view.
+   * The CF is the same either way; the curves leave it off (no per-depth allocations).
+   */
+  explain?: boolean | undefined;
   /** ETAR default weighting: scatter attenuation length λ (cm); 1/μ_eff of the water data when absent. */
   etarScatterLengthCm?: number | undefined;
 }
@@ -30,6 +36,8 @@ export interface CorrectionResult {
   /** D_het/D_water at the point, or null where the method gives no value. */
   cf: number | null;
   flags: string[];
+  /** The terms the CF was multiplied from (correctionExplanation.ts); absent where none were read. */
+  explanation?: CorrectionExplanation;
 }
 
 export interface TypeAMethod {
@@ -63,10 +71,16 @@ export function collectingRecorder(): { recorder: LookupRecorder; flags: () => s
 }
 
 /** A CF that is finite and positive, or null (never NaN) with a flag saying why. */
-export function checkedCf(cf: number, flags: string[]): CorrectionResult {
-  if (Number.isFinite(cf) && cf > 0) return { cf, flags };
+export function checkedCf(
+  cf: number,
+  flags: string[],
+  explanation?: CorrectionExplanation,
+): CorrectionResult {
+  const terms = explanation ? { explanation } : {};
+  if (Number.isFinite(cf) && cf > 0) return { cf, flags, ...terms };
   return {
     cf: null,
     flags: [...flags, 'undefined: the method gives no finite positive value here'],
+    ...terms,
   };
 }

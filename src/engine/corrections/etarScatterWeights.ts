@@ -35,10 +35,15 @@ function integralFromPoint(tCm: number, radiusCm: number, lambdaCm: number): num
   return 0.5 * sum;
 }
 
+/** Radius (cm) of the disc with the area of a square field of this side: s/√π. */
+export function equalAreaRadiusCm(sideCm: number): number {
+  return sideCm / Math.sqrt(Math.PI);
+}
+
 /** Weights from the exponential scatter kernel with attenuation length λ (cm). */
 export function exponentialKernelWeights(lambdaCm: number): ScatterWeightFunction {
   return (phantom: SlabPhantom, pointDepthCm: number, sideAtDepthCm: number) => {
-    const radiusCm = sideAtDepthCm / Math.sqrt(Math.PI);
+    const radiusCm = equalAreaRadiusCm(sideAtDepthCm);
     const n = phantom.layers.length;
     const out = new Float64Array(n);
     const reach = 20 * lambdaCm;

@@ -12,6 +12,7 @@ import { dosePerMuFactors } from '../check/dosePerMu';
 import type { MethodPoint, MethodResult } from '../methodResult';
 import type { SlabPhantom } from '../phantom/slabPhantom';
 import { collectingRecorder, type CorrectionOptions, type TypeAMethod } from './correctionTypes';
+import type { CorrectionExplanation } from './correctionExplanation';
 
 export interface TypeAGeometry {
   phantom: SlabPhantom;
@@ -24,12 +25,16 @@ export interface TypeAGeometry {
   points: readonly { id: string; depthCm: number }[];
 }
 
-interface Evaluation {
+export interface Evaluation {
   cf: number | null;
   dosePerMuCGy: number | null;
   flags: string[];
   /** True when the value needed TMR beyond the deepest tabulated depth (then withheld). */
   beyondTable: boolean;
+  /** The terms the method multiplied into its CF (correctionExplanation.ts). */
+  explanation?: CorrectionExplanation | undefined;
+  /** Equivalent square of the field at the depth (cm): the s_d the method was given. */
+  sideAtDepthCm: number;
 }
 
 /** Clamp flags of depth reads: replaced by the beyond-the-table reason when a value is withheld. */
@@ -49,15 +54,18 @@ function evaluate(
     fieldAtDepthCm(g.fieldYCm, g.ssdCm, depthCm),
   );
   const r = method.correct(g.phantom, depthCm, side, wd, options);
+  const terms = { explanation: r.explanation, sideAtDepthCm: side };
   const withheld = (flags: string[], deepestCm: number): Evaluation => ({
     cf: null,
     dosePerMuCGy: null,
     flags: [beyondWaterDataFlag(wd, deepestCm), ...flags.filter((f) => !isDepthClampFlag(f))],
     beyondTable: true,
+    ...terms,
   });
   const beyondInCf = watch.deepestBeyondCm();
   if (beyondInCf !== null) return withheld(r.flags, beyondInCf);
-  if (r.cf === null) return { cf: null, dosePerMuCGy: null, flags: r.flags, beyondTable: false };
+  if (r.cf === null)
+    return { cf: null, dosePerMuCGy: null, flags: r.flags, beyondTable: false, ...terms };
   const { recorder, flags } = collectingRecorder();
   const factors = dosePerMuFactors({
     waterData: wd,
@@ -72,7 +80,30 @@ function evaluate(
   const beyondInChain = watch.deepestBeyondCm();
   if (beyondInChain !== null) return withheld(all, beyondInChain);
   const dose = Number.isFinite(factors.dosePerMuCGy) ? factors.dosePerMuCGy : null;
-  return { cf: r.cf, dosePerMuCGy: dose, flags: all, beyondTable: false };
+  return { cf: r.cf, dosePerMuCGy: dose, flags: all, beyondTable: false, ...terms };
+}
+
+const withSsd = (options: CorrectionOptions, g: TypeAGeometry): CorrectionOptions => ({
+  ...options,
+  ssdCm: options.ssdCm ?? g.ssdCm,
+});
+
+/**
+ * One method at one depth exactly as its curve and points are computed (same options, field side
+ * and water data, the same withholding beyond the water data), with the terms it multiplied: the
+ * factor view reads this.
+ */
+export function typeAAtDepth(
+  method: TypeAMethod,
+  g: TypeAGeometry,
+  wd: WaterData,
+  depthCm: number,
+  options: CorrectionOptions = {},
+): Evaluation {
+  return evaluate(method, g, watchDepthReach(wd), depthCm, {
+    ...withSsd(options, g),
+    explain: true,
+  });
 }
 
 export function typeAMethodResult(
@@ -81,7 +112,7 @@ export function typeAMethodResult(
   wd: WaterData,
   options: CorrectionOptions = {},
 ): MethodResult {
-  const opts: CorrectionOptions = { ...options, ssdCm: options.ssdCm ?? g.ssdCm };
+  const opts = withSsd(options, g);
   const watch = watchDepthReach(wd);
   const cf: (number | null)[] = [];
   const dose: (number | null)[] = [];

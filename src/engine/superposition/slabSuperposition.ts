@@ -21,6 +21,7 @@ import {
   type QuadrantTable,
 } from '../kernels/quadrant';
 import { hardeningMixAt, type HardeningMix } from '../kernels/kernelHardening';
+import type { KernelComponent } from '../kernels/pointKernelTable';
 import { termaAlongRay } from '../kernels/terma';
 import type { Spectrum } from '../kernels/spectrum';
 import { FIELD_DEFINITION_DISTANCE_CM } from '../beam/geometry';
@@ -48,6 +49,10 @@ export interface SuperpositionOptions {
   cellStepCm?: number;
   /** Radiological distance (cm) beyond which merged groups of cells are used. Default 3. */
   groupNearCm?: number;
+  /** Only the TERMA released in this layer (index from the surface): dose by layer of origin. */
+  sourceLayerIndex?: number;
+  /** Kernel part to superpose (typeBDose.ts): total (default), primary or scatter. */
+  kernelComponent?: KernelComponent;
 }
 
 /** Half-widths of the field at a depth (cm). */
@@ -179,6 +184,7 @@ export function superpositionDose(
   const sk: SuperpositionKernel = 'values' in kernelIn ? { table: kernelIn } : kernelIn;
   const kernel = sk.table;
   const cells = sourceCells(phantom, options.cellStepCm ?? 0.2);
+  const onlyLayer = options.sourceLayerIndex;
   const terma = termaAlongRay(phantom, spectrum, cells.centreCm, { ssdCm: beam.ssdCm });
   const divergent = Number.isFinite(beam.ssdCm);
   // Hardening fraction of each cell's kernel, from its radiological depth.
@@ -269,6 +275,8 @@ export function superpositionDose(
     };
     for (let k = 0; k < groups.count; k++) {
       const c0 = groups.first[k] as number;
+      // Groups never straddle a layer: one test per group selects the layer of origin.
+      if (onlyLayer !== undefined && cells.layer[c0] !== onlyLayer) continue;
       const c1 = c0 + (groups.size[k] as number);
       const nearest = Math.min(
         Math.abs(dz - (boundaries[c0] as number)),

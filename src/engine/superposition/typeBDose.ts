@@ -33,7 +33,7 @@ export function typeBPhotonDose(
   if (engine === 'pencil-beam')
     return pencilBeamDose(model.pencil, phantom, beam, depthsCm, lateralCm);
   return superpositionDose(
-    model.superpositionKernel('total'),
+    model.superpositionKernel(options.kernelComponent ?? 'total'),
     model.spectrum,
     phantom,
     beam,
