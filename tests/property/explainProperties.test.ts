@@ -35,10 +35,12 @@ describe('written-out factors', () => {
           const d = u * p.totalThicknessCm;
           for (const m of TYPE_A_METHODS) {
             const r = m.correct(p, d, s, wd, { ...options, explain: true });
-            expect(r.explanation, m.id).toBeDefined();
             // The curves' call (no terms asked for) returns the very same CF.
             expect(m.correct(p, d, s, wd, options).cf, m.id).toBe(r.cf);
+            // A withheld value (unshifted Batho within d_max below an interface) has its reason in
+            // the flags and no product to write out.
             if (r.cf === null) continue;
+            expect(r.explanation, m.id).toBeDefined();
             const product = productOfFactors(r.explanation?.factors ?? []);
             expect(Math.abs(product - r.cf) / r.cf, m.id).toBeLessThanOrEqual(1e-9);
           }

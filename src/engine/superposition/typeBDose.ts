@@ -57,6 +57,12 @@ export function typeBRawDose(
   options: SuperpositionOptions = {},
 ): Float64Array {
   const photons = typeBPhotonDose(engine, energy, phantom, beam, depthsCm, lateralCm, options);
+  // A part of the photon dose (one kernel component, the TERMA of one layer) carries no
+  // contaminant electrons: they come neither from the kernel nor from the TERMA.
+  const photonPart =
+    (options.kernelComponent !== undefined && options.kernelComponent !== 'total') ||
+    options.sourceLayerIndex !== undefined;
+  if (photonPart) return photons;
   const electrons = contaminantElectronDose(
     contaminantElectronModel(energy),
     phantom,

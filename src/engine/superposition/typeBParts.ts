@@ -2,7 +2,8 @@
 // own dose function (typeBDose.ts) with one option changed: the heterogeneous and the water dose
 // whose ratio is the CF, the primary and the scatter part of the kernel (superposition), and the
 // dose from the TERMA released in each layer (superposition). The kernels are linear in both, so
-// the parts add up to the total (to rounding; tests check it).
+// the photon parts add up to the photon dose (to rounding; tests check it); the total also holds
+// the contaminant electrons, which are neither kernel nor TERMA.
 import type { BeamEnergy } from '../beam/energies';
 import { waterPhantom, type SlabPhantom } from '../phantom/slabPhantom';
 import type { SlabBeam } from './slabSuperposition';

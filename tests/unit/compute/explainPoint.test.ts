@@ -34,7 +34,9 @@ describe('explainPointRequest', () => {
               ?.points.find((x) => x.id === p.id)?.cf;
             expect(reported, `${m.id} at ${p.id}`).toBeDefined();
             if (reported === null || reported === undefined) {
+              // Withheld in the report (e.g. unshifted Batho just below an interface): withheld here.
               expect(m.cf).toBeNull();
+              compared++;
               continue;
             }
             expect(Math.abs((m.cf as number) / reported - 1), `${m.id} at ${p.id}`).toBeLessThan(
@@ -47,7 +49,7 @@ describe('explainPointRequest', () => {
             compared++;
           }
         }
-        // 6 type-A + 2 type-B methods at every point
+        // 6 type-A + 2 type-B methods at every point, each compared or withheld in both
         expect(compared).toBe(8 * c.points.length);
       });
 
@@ -73,13 +75,17 @@ describe('explainPointRequest', () => {
     const e = explained(demo('lung-slab-6mv.json'), 15, 'water');
     const parts = e.methods.find((m) => m.id === 'superposition')?.parts;
     if (!parts?.primary || !parts.scatter || !parts.byLayerOfOrigin) throw new Error('parts');
-    // The kernel is linear in its parts and in the TERMA: sums equal the total to rounding (1e-9)
+    // The kernel is linear in its parts and in the TERMA: the layers of origin and the kernel's
+    // primary + scatter are two independent splits of the same photon dose (equal to 1e-9)
     const split = parts.primary.dosePerMuCGy + parts.scatter.dosePerMuCGy;
-    expect(Math.abs(split / parts.dosePerMuCGy - 1)).toBeLessThan(1e-9);
-    const water = parts.primary.waterDosePerMuCGy + parts.scatter.waterDosePerMuCGy;
-    expect(Math.abs(water / parts.waterDosePerMuCGy - 1)).toBeLessThan(1e-9);
     const byLayer = parts.byLayerOfOrigin.reduce((a, b) => a + b, 0);
-    expect(Math.abs(byLayer / parts.dosePerMuCGy - 1)).toBeLessThan(1e-9);
+    expect(Math.abs(byLayer / split - 1)).toBeLessThan(1e-9);
+    // The total also holds the contaminant electrons (neither kernel nor TERMA): a trace at 15 cm
+    expect(parts.dosePerMuCGy).toBeGreaterThanOrEqual(split);
+    expect(parts.dosePerMuCGy / split - 1).toBeLessThan(1e-6);
+    const water = parts.primary.waterDosePerMuCGy + parts.scatter.waterDosePerMuCGy;
+    expect(parts.waterDosePerMuCGy).toBeGreaterThanOrEqual(water);
+    expect(parts.waterDosePerMuCGy / water - 1).toBeLessThan(1e-6);
     expect(parts.byLayerOfOrigin).toHaveLength(3);
     // 6 MV, 15 cm (4 cm below an 8 cm lung): the primary part is the larger one, and the layer
     // holding the point gives the most dose (common practice: electron ranges of a few cm)
